@@ -1,0 +1,84 @@
+#pragma once
+/// The page description as plain values: what the YAML said, validated,
+/// with the location of every value a later stage may need to complain about.
+#include <map>
+#include <optional>
+#include <string>
+#include <vector>
+
+#include "base/diagnostic.h"
+#include "data/table.h"
+#include "scale/number_format.h"
+
+namespace forme {
+
+/// A string from the description with where it was written.
+struct Located {
+  std::string value;
+  SourceLoc loc;
+  bool empty() const { return value.empty(); }
+};
+
+struct Margins {
+  double top = 0, right = 0, bottom = 0, left = 0;  ///< points
+};
+
+struct SheetSpec {
+  std::string size_name;     ///< "A4", "letter", or "custom"
+  double width = 0, height = 0;  ///< points, after orientation
+  Margins margins;
+  SourceLoc loc;
+};
+
+enum class ChartKind { line, vertical_bar, horizontal_bar, dot };
+
+/// One axis as the author described it.
+struct AxisSpec {
+  std::string title;  ///< e.g. "Stored"
+  std::string unit;   ///< e.g. "% of capacity"
+  std::optional<NumberFormat> format;
+};
+
+struct PanelSpec {
+  ChartKind kind = ChartKind::line;
+  Located table, x, y, series_by;
+  std::string title;
+  AxisSpec x_axis, y_axis;
+  /// Rows kept: column → wanted cell text (all must match).
+  std::vector<std::pair<Located, std::string>> where;
+  SourceLoc loc;  ///< the panel mapping (or grid) this came from
+};
+
+struct GridSpec {
+  int columns = 0;  ///< 0: chosen from the panel count
+  int rows = 0;     ///< 0: as many as needed
+  Located one_panel_per;  ///< column whose distinct values each get a panel
+  std::vector<std::string> order;  ///< optional order of those values
+  double gap = 0;   ///< points between panels; 0 = automatic
+  SourceLoc loc;
+};
+
+struct TableSource {
+  std::string name;
+  std::string path;          ///< resolved against the page file's folder
+  std::string display_path;  ///< as written
+  std::map<std::string, ColumnType, std::less<>> declared;
+  SourceLoc loc;
+};
+
+struct PageSpec {
+  std::string file;      ///< the description's path, for messages
+  std::string base_dir;  ///< folder that relative paths start from
+  SheetSpec sheet;
+  std::string title, standfirst;
+  std::vector<TableSource> tables;
+  GridSpec grid;
+  /// Panels as listed, or (with one_panel_per) the single template panel.
+  std::vector<PanelSpec> panels;
+  std::string source;
+  std::vector<std::string> notes;
+  double type_size = 0;  ///< base text size in points; 0 = from the sheet
+  SourceLoc loc;
+};
+
+}  // namespace forme

@@ -1,0 +1,245 @@
+#include "describe/read_page.h"
+
+#include <filesystem>
+#include <sstream>
+
+#include "describe/lengths.h"
+#include "describe/schema.h"
+#include "describe/validate.h"
+
+namespace forme {
+
+namespace {
+
+class Builder {
+ public:
+  explicit Builder(const YamlDocument& doc) : doc_(doc) {}
+
+  PageSpec build() {
+    const YAML::Node& r = doc_.root;
+    PageSpec p;
+    p.file = doc_.file;
+    p.loc = SourceLoc{doc_.file, 1, 1};
+    std::filesystem::path base = std::filesystem::path(doc_.file).parent_path();
+    p.base_dir = base.empty() ? "." : base.string();
+    p.sheet = sheet(r["sheet"]);
+    if (auto h = r["heading"]) {
+      p.title = str(h["title"]);
+      p.standfirst = str(h["standfirst"]);
+    }
+    for (auto it = r["tables"].begin(); it != r["tables"].end(); ++it)
+      p.tables.push_back(table(it->first.Scalar(), it->second, p.base_dir));
+    p.grid = grid(r["grid"], r);
+    PanelSpec defaults;
+    defaults.loc = doc_.loc(r);
+    if (auto pn = r["panel"]) defaults = panel(pn, defaults);
+    if (auto list = r["panels"]) {
+      for (const auto& item : list) p.panels.push_back(panel(item, defaults));
+    } else if (r["panel"]) {
+      p.panels.push_back(defaults);
+    }
+    if (p.panels.empty())
+      throw InputError(doc_.loc(r), "the page has no panels", "add a 'panel' (or a 'panels' list)");
+    p.source = str(r["source"]);
+    if (auto notes = r["notes"])
+      for (const auto& n : notes) p.notes.push_back(n.Scalar());
+    if (auto t = r["type"]; t && t["size"]) {
+      p.type_size = *parse_length(t["size"].Scalar());
+      if (p.type_size < 6)
+        throw InputError(doc_.loc(t["size"]), "type size below 6pt cannot be read in print",
+                         "use 6pt or more (common practice for printed figures)");
+    }
+    return p;
+  }
+
+ private:
+  static std::string str(const YAML::Node& n) { return n && n.IsScalar() ? n.Scalar() : std::string(); }
+  Located located(const YAML::Node& n) const {
+    if (!n) return {};
+    return {n.Scalar(), doc_.loc(n)};
+  }
+
+  SheetSpec sheet(const YAML::Node& n) {
+    SheetSpec s;
+    s.size_name = "A4";
+    s.loc = n ? doc_.loc(n) : SourceLoc{doc_.file, 1, 1};
+    double w = mm_to_pt(210), h = mm_to_pt(297);
+    if (n && n["size"]) {
+      const std::string& name = n["size"].Scalar();
+      if (auto known = find_sheet_size(name)) {
+        s.size_name = known->name;
+        w = mm_to_pt(known->width_mm);
+        h = mm_to_pt(known->height_mm);
+      } else if (auto custom = parse_custom_size(name)) {
+        s.size_name = "custom";
+        std::tie(w, h) = *custom;
+      } else {
+        throw InputError(doc_.loc(n["size"]), "unknown sheet size '" + name + "'",
+                         "use A0-A6, B0-B6, letter, legal, tabloid, or WIDTH x HEIGHT such as \"120mm x 80mm\"");
+      }
+      if (w <= 0 || h <= 0)
+        throw InputError(doc_.loc(n["size"]), "sheet width and height must be positive");
+      // ISO 216's largest sheet is 4A0 (1682 × 2378 mm); PDF viewers limit
+      // pages to 200 inches a side (ISO 32000-1 Annex C, a common limit).
+      if (w > 200 * 72 || h > 200 * 72)
+        throw InputError(doc_.loc(n["size"]), "sheet larger than 200 inches on a side",
+                         "PDF readers cannot show pages that large");
+    }
+    if (n && n["orientation"] && n["orientation"].Scalar() == "landscape") {
+      if (w < h) std::swap(w, h);
+    } else if (n && n["orientation"] && n["orientation"].Scalar() == "portrait") {
+      if (w > h) std::swap(w, h);
+    }
+    s.width = w;
+    s.height = h;
+    double d = mm_to_pt(15);
+    s.margins = {d, d, d, d};
+    if (n && n["margins"]) s.margins = margins(n["margins"]);
+    const Margins& m = s.margins;
+    if (m.left + m.right >= w * 0.8 || m.top + m.bottom >= h * 0.8)
+      throw InputError(doc_.loc(n["margins"]), "margins leave almost no room on the sheet",
+                       "margins may take at most 80% of the sheet's width or height");
+    return s;
+  }
+
+  Margins margins(const YAML::Node& n) {
+    if (n.IsMap()) {
+      Margins m;
+      double d = mm_to_pt(15);
+      m = {d, d, d, d};
+      if (n["top"]) m.top = *parse_length(n["top"].Scalar());
+      if (n["right"]) m.right = *parse_length(n["right"].Scalar());
+      if (n["bottom"]) m.bottom = *parse_length(n["bottom"].Scalar());
+      if (n["left"]) m.left = *parse_length(n["left"].Scalar());
+      check_margins(m, n);
+      return m;
+    }
+    std::istringstream words(n.Scalar());
+    std::vector<double> v;
+    std::string w;
+    while (words >> w) {
+      auto len = parse_length(w);
+      if (!len)
+        throw InputError(doc_.loc(n), "margin '" + w + "' is not a length", "write lengths with units, e.g. 18mm");
+      v.push_back(*len);
+    }
+    Margins m;
+    if (v.size() == 1) m = {v[0], v[0], v[0], v[0]};
+    else if (v.size() == 2) m = {v[0], v[1], v[0], v[1]};  // vertical, horizontal
+    else if (v.size() == 4) m = {v[0], v[1], v[2], v[3]};  // top, right, bottom, left (clockwise)
+    else
+      throw InputError(doc_.loc(n), "margins take one, two or four lengths",
+                       "one for all sides; two for top/bottom and left/right; four clockwise from the top");
+    check_margins(m, n);
+    return m;
+  }
+
+  void check_margins(const Margins& m, const YAML::Node& n) {
+    if (m.top < 0 || m.right < 0 || m.bottom < 0 || m.left < 0)
+      throw InputError(doc_.loc(n), "margins cannot be negative");
+  }
+
+  TableSource table(const std::string& name, const YAML::Node& n, const std::string& base) {
+    TableSource t;
+    t.name = name;
+    t.loc = doc_.loc(n);
+    t.display_path = n.IsScalar() ? n.Scalar() : n["file"].Scalar();
+    std::filesystem::path p(t.display_path);
+    t.path = p.is_absolute() ? p.string() : (std::filesystem::path(base) / p).string();
+    if (n.IsMap() && n["types"])
+      for (auto it = n["types"].begin(); it != n["types"].end(); ++it) {
+        const std::string& ty = it->second.Scalar();
+        t.declared[it->first.Scalar()] =
+            ty == "number" ? ColumnType::number : ty == "date" ? ColumnType::date : ColumnType::text;
+      }
+    return t;
+  }
+
+  GridSpec grid(const YAML::Node& n, const YAML::Node& root) {
+    GridSpec g;
+    g.loc = n ? doc_.loc(n) : doc_.loc(root);
+    if (!n) return g;
+    if (n["columns"]) g.columns = positive(n["columns"], "grid columns");
+    if (n["rows"]) g.rows = positive(n["rows"], "grid rows");
+    if (n["one-panel-per"]) g.one_panel_per = located(n["one-panel-per"]);
+    if (auto o = n["order"])
+      for (const auto& v : o) g.order.push_back(v.Scalar());
+    if (n["gap"]) g.gap = *parse_length(n["gap"].Scalar());
+    return g;
+  }
+
+  int positive(const YAML::Node& n, const char* what) {
+    int v = n.as<int>();
+    if (v < 1 || v > 50)
+      throw InputError(doc_.loc(n), std::string(what) + " must be between 1 and 50");
+    return v;
+  }
+
+  static ChartKind kind(const std::string& k) {
+    if (k == "vertical-bar") return ChartKind::vertical_bar;
+    if (k == "horizontal-bar") return ChartKind::horizontal_bar;
+    if (k == "dot") return ChartKind::dot;
+    return ChartKind::line;
+  }
+
+  NumberFormat format(const YAML::Node& n) {
+    NumberFormat f;
+    auto style = [](const std::string& s) {
+      if (s == "percent") return NumberFormat::Style::percent;
+      if (s == "fraction-percent") return NumberFormat::Style::fraction_percent;
+      if (s == "si") return NumberFormat::Style::si;
+      return NumberFormat::Style::plain;
+    };
+    if (n.IsScalar()) {
+      f.style = style(n.Scalar());
+      return f;
+    }
+    if (n["style"]) f.style = style(n["style"].Scalar());
+    if (n["decimals"]) {
+      f.decimals = n["decimals"].as<int>();
+      if (f.decimals < 0 || f.decimals > 10)
+        throw InputError(doc_.loc(n["decimals"]), "decimals must be between 0 and 10");
+    }
+    if (n["thousands"]) f.thousands = n["thousands"].Scalar() == "true";
+    if (n["prefix"]) f.prefix = n["prefix"].Scalar();
+    if (n["suffix"]) f.suffix = n["suffix"].Scalar();
+    return f;
+  }
+
+  PanelSpec panel(const YAML::Node& n, PanelSpec p) {
+    p.loc = doc_.loc(n);
+    if (n["kind"]) p.kind = kind(n["kind"].Scalar());
+    if (n["table"]) p.table = located(n["table"]);
+    if (n["x"]) p.x = located(n["x"]);
+    if (n["y"]) p.y = located(n["y"]);
+    if (n["series-by"]) p.series_by = located(n["series-by"]);
+    if (n["title"]) p.title = n["title"].Scalar();
+    if (n["x-title"]) p.x_axis.title = n["x-title"].Scalar();
+    if (n["x-unit"]) p.x_axis.unit = n["x-unit"].Scalar();
+    if (n["x-format"]) p.x_axis.format = format(n["x-format"]);
+    if (n["y-title"]) p.y_axis.title = n["y-title"].Scalar();
+    if (n["y-unit"]) p.y_axis.unit = n["y-unit"].Scalar();
+    if (n["y-format"]) p.y_axis.format = format(n["y-format"]);
+    if (auto w = n["where"]) {
+      p.where.clear();
+      for (auto it = w.begin(); it != w.end(); ++it)
+        p.where.push_back({located(it->first), it->second.Scalar()});
+    }
+    return p;
+  }
+
+  const YamlDocument& doc_;
+};
+
+}  // namespace
+
+PageSpec build_page_spec(const YamlDocument& doc) { return Builder(doc).build(); }
+
+std::optional<PageSpec> read_page(const std::string& path, std::vector<Diagnostic>& errors) {
+  YamlDocument doc = load_yaml_file(path);
+  errors = validate_document(doc, page_schema());
+  if (!errors.empty()) return std::nullopt;
+  return build_page_spec(doc);
+}
+
+}  // namespace forme

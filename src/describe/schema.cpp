@@ -1,0 +1,156 @@
+#include "describe/schema.h"
+
+namespace forme {
+
+namespace {
+
+NodeSpec scalar(std::string_view what, ScalarType t, std::string_view doc = {}) {
+  NodeSpec n;
+  n.what = what;
+  n.scalar_ok = true;
+  n.scalar = t;
+  n.doc = doc;
+  return n;
+}
+
+NodeSpec choice(std::string_view what, std::vector<std::string_view> choices, std::string_view doc = {}) {
+  NodeSpec n = scalar(what, ScalarType::choice, doc);
+  n.choices = std::move(choices);
+  return n;
+}
+
+NodeSpec mapping(std::string_view what, std::vector<KeySpec> keys, std::string_view doc = {}) {
+  NodeSpec n;
+  n.what = what;
+  n.map_ok = true;
+  n.keys = std::move(keys);
+  n.doc = doc;
+  return n;
+}
+
+NodeSpec list_of(std::string_view what, const NodeSpec* item, std::string_view doc = {}) {
+  NodeSpec n;
+  n.what = what;
+  n.list_ok = true;
+  n.item = item;
+  n.doc = doc;
+  return n;
+}
+
+struct Schema {
+  NodeSpec text = scalar("a string", ScalarType::text);
+  NodeSpec integer = scalar("a whole number", ScalarType::integer);
+  NodeSpec length = scalar("a length with its unit, such as 18mm, 1.5cm, 0.5in or 9pt", ScalarType::length);
+  NodeSpec boolean = scalar("true or false", ScalarType::boolean);
+  NodeSpec text_list = list_of("a list of strings", &text);
+
+  NodeSpec margins_map = mapping("margins for each side",
+      {{"top", &length, false, "space above the content"},
+       {"right", &length, false, "space right of the content"},
+       {"bottom", &length, false, "space below the content"},
+       {"left", &length, false, "space left of the content"}});
+  NodeSpec margins = [&] {
+    NodeSpec n = margins_map;
+    n.what = "a length, two or four lengths (\"18mm 15mm\"), or a mapping of sides";
+    n.scalar_ok = true;
+    n.scalar = ScalarType::text;
+    return n;
+  }();
+  NodeSpec orientation = choice("portrait or landscape", {"portrait", "landscape"});
+  NodeSpec sheet = mapping("the sheet",
+      {{"size", &text, false, "A0-A6, B0-B6, letter, legal, tabloid, or \"WIDTH x HEIGHT\" with units"},
+       {"orientation", &orientation, false, "portrait (default) or landscape"},
+       {"margins", &margins, false, "space between the sheet edge and the content"}},
+      "paper size, orientation and margins");
+
+  NodeSpec heading = mapping("the page heading",
+      {{"title", &text, false, "the page's headline: what the reader should take away"},
+       {"standfirst", &text, false, "one or two sentences under the title: what is shown, in what units"}});
+
+  NodeSpec column_type = choice("number, date or text", {"number", "date", "text"});
+  NodeSpec types = [&] {
+    NodeSpec n = mapping("column types", {});
+    n.any_key = &column_type;
+    return n;
+  }();
+  NodeSpec table_map = mapping("a table",
+      {{"file", &text, true, "CSV file, relative to the page description"},
+       {"types", &types, false, "declared column types, overriding inference"}});
+  NodeSpec table = [&] {
+    NodeSpec n = table_map;
+    n.what = "a CSV path or a mapping with 'file'";
+    n.scalar_ok = true;
+    return n;
+  }();
+  NodeSpec tables = [&] {
+    NodeSpec n = mapping("named tables", {}, "data tables by name");
+    n.any_key = &table;
+    return n;
+  }();
+
+  NodeSpec grid = mapping("the panel grid",
+      {{"columns", &integer, false, "panels across"},
+       {"rows", &integer, false, "panels down"},
+       {"one-panel-per", &text, false, "a column: one panel for each of its distinct values"},
+       {"order", &text_list, false, "order of the one-panel-per values"},
+       {"gap", &length, false, "space between panels"}});
+
+  NodeSpec kind = choice("a chart kind", {"line", "vertical-bar", "horizontal-bar", "dot"});
+  NodeSpec format_style = choice("a number style", {"plain", "percent", "fraction-percent", "si"});
+  NodeSpec format_map = mapping("a number format",
+      {{"style", &format_style, false, "plain, percent (values in %), fraction-percent (0.25 = 25%), si (k, M, G)"},
+       {"decimals", &integer, false, "fixed digits after the decimal point"},
+       {"thousands", &boolean, false, "group thousands (default true)"},
+       {"prefix", &text, false, "written before each number, e.g. a currency sign"},
+       {"suffix", &text, false, "written after each number"}});
+  NodeSpec format = [&] {
+    NodeSpec n = format_map;
+    n.what = "a number style (plain, percent, fraction-percent, si) or a format mapping";
+    n.scalar_ok = true;
+    n.scalar = ScalarType::choice;
+    n.choices = format_style.choices;
+    return n;
+  }();
+  NodeSpec where = [&] {
+    NodeSpec n = mapping("row filters", {}, "keep rows whose column equals the value");
+    n.any_key = &text;
+    return n;
+  }();
+  NodeSpec panel = mapping("a panel",
+      {{"kind", &kind, false, "line, vertical-bar, horizontal-bar or dot"},
+       {"table", &text, false, "name of a table under 'tables'"},
+       {"x", &text, false, "column for the horizontal position (categories for vertical bars)"},
+       {"y", &text, false, "column for the vertical position (categories for horizontal bars and dots)"},
+       {"series-by", &text, false, "column whose distinct values each make one series"},
+       {"title", &text, false, "panel title"},
+       {"where", &where, false, "keep only rows matching these column values"},
+       {"x-title", &text, false, "horizontal axis title"},
+       {"x-unit", &text, false, "unit of the horizontal axis"},
+       {"x-format", &format, false, "number format of the horizontal axis"},
+       {"y-title", &text, false, "vertical axis title"},
+       {"y-unit", &text, false, "unit of the vertical axis"},
+       {"y-format", &format, false, "number format of the vertical axis"}});
+  NodeSpec panels = list_of("a list of panels", &panel);
+
+  NodeSpec type = mapping("type settings", {{"size", &length, false, "base text size (tick labels, notes)"}});
+
+  NodeSpec page = mapping("a page description",
+      {{"sheet", &sheet, false, "paper size, orientation and margins"},
+       {"heading", &heading, false, "title and standfirst"},
+       {"tables", &tables, true, "data tables by name"},
+       {"grid", &grid, false, "how panels are arranged"},
+       {"panel", &panel, false, "the panel, or the template for one-panel-per grids and defaults for 'panels'"},
+       {"panels", &panels, false, "panels listed one by one"},
+       {"source", &text, false, "source line printed at the foot of the page"},
+       {"notes", &text_list, false, "notes printed at the foot of the page"},
+       {"type", &type, false, "type sizes"}});
+};
+
+}  // namespace
+
+const NodeSpec& page_schema() {
+  static const Schema schema;
+  return schema.page;
+}
+
+}  // namespace forme

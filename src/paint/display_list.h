@@ -1,0 +1,63 @@
+#pragma once
+/// The painted page as plain values: shapes and shaped text in page
+/// coordinates (points, y down). Layout produces it; painters consume it and
+/// know nothing else about the page.
+#include <optional>
+#include <string>
+#include <variant>
+#include <vector>
+
+#include "base/geometry.h"
+#include "colour/rgb.h"
+#include "text/shaped_text.h"
+
+namespace forme {
+
+struct Stroke {
+  Rgb colour;
+  double width = 0.5;            ///< points
+  std::vector<double> dash;      ///< on/off lengths in points; empty = solid
+  bool round = false;            ///< round caps and joins (lines), else butt/miter
+};
+
+/// A polyline or polygon.
+struct PathItem {
+  std::vector<Point> points;
+  bool closed = false;
+  std::optional<Rgb> fill;
+  std::optional<Stroke> stroke;
+};
+
+struct CircleItem {
+  Point centre;
+  double radius = 1;
+  std::optional<Rgb> fill;
+  std::optional<Stroke> stroke;
+};
+
+/// What a piece of text is for; tests and the overlap check use it.
+enum class TextRole { title, standfirst, panel_title, axis_title, tick_label, series_label, value_label, note, source };
+
+struct TextItem {
+  ShapedText text;
+  Point origin;  ///< left end of the baseline
+  Rgb colour;
+  TextRole role = TextRole::note;
+
+  /// The ink-independent box: advance width × (ascent + descent).
+  Rect box() const {
+    return {origin.x, origin.y - text.ascent, text.width, text.ascent + text.descent};
+  }
+};
+
+using DisplayItem = std::variant<PathItem, CircleItem, TextItem>;
+
+struct DisplayPage {
+  double width = 0, height = 0;  ///< sheet size, points
+  std::vector<DisplayItem> items;
+  std::string title;  ///< document title for metadata
+
+  void add(DisplayItem item) { items.push_back(std::move(item)); }
+};
+
+}  // namespace forme

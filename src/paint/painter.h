@@ -1,0 +1,40 @@
+#pragma once
+/// One interface for every output format. A painter receives whole pages
+/// and writes them to a stream; formats differ only in how they open a
+/// Cairo surface and finish the file.
+#include <memory>
+#include <ostream>
+#include <string>
+
+#include "paint/display_list.h"
+
+namespace forme {
+
+enum class OutputFormat { pdf, svg, png };
+
+struct DocumentInfo {
+  std::string title;
+  std::string creator = "forme";
+};
+
+class Painter {
+ public:
+  virtual ~Painter() = default;
+  /// Paints one page. Pages after the first are only allowed in PDF.
+  virtual void paint(const DisplayPage& page) = 0;
+  /// Finishes the file; after this the stream holds the complete output.
+  virtual void finish() = 0;
+};
+
+struct PaintOptions {
+  double dpi = 150;  ///< raster resolution for PNG
+  DocumentInfo info;
+};
+
+/// Creates the painter for `format`, writing to `out` (which must outlive it).
+std::unique_ptr<Painter> make_painter(OutputFormat format, std::ostream& out, const PaintOptions& options);
+
+/// Format from a file name's extension (.pdf, .svg, .png); nullopt if unknown.
+std::optional<OutputFormat> format_for_path(const std::string& path);
+
+}  // namespace forme

@@ -1,0 +1,60 @@
+// PDF output: vector pages, fonts embedded as subsets by Cairo.
+#include <cairo-pdf.h>
+
+#include "paint/cairo_stream.h"
+#include "paint/draw_cairo.h"
+#include "paint/painter.h"
+
+namespace forme {
+
+namespace {
+
+class PdfPainter final : public Painter {
+ public:
+  PdfPainter(std::ostream& out, const PaintOptions& options) : out_(out), options_(options) {}
+  ~PdfPainter() override {
+    if (cr_) cairo_destroy(cr_);
+    if (surface_) cairo_surface_destroy(surface_);
+  }
+
+  void paint(const DisplayPage& page) override {
+    if (!surface_) {
+      surface_ = cairo_pdf_surface_create_for_stream(write_to_ostream, &out_, page.width, page.height);
+      check_cairo(cairo_surface_status(surface_), "PDF surface");
+      cairo_pdf_surface_restrict_to_version(surface_, CAIRO_PDF_VERSION_1_5);
+      const std::string& title = options_.info.title.empty() ? page.title : options_.info.title;
+      if (!title.empty()) cairo_pdf_surface_set_metadata(surface_, CAIRO_PDF_METADATA_TITLE, title.c_str());
+      cairo_pdf_surface_set_metadata(surface_, CAIRO_PDF_METADATA_CREATOR, options_.info.creator.c_str());
+      cr_ = cairo_create(surface_);
+    } else {
+      cairo_pdf_surface_set_size(surface_, page.width, page.height);
+    }
+    draw_page(cr_, page);
+    cairo_show_page(cr_);
+    check_cairo(cairo_status(cr_), "PDF page");
+  }
+
+  void finish() override {
+    if (!surface_) return;
+    cairo_destroy(cr_);
+    cr_ = nullptr;
+    cairo_surface_finish(surface_);
+    check_cairo(cairo_surface_status(surface_), "PDF file");
+    cairo_surface_destroy(surface_);
+    surface_ = nullptr;
+  }
+
+ private:
+  std::ostream& out_;
+  PaintOptions options_;
+  cairo_surface_t* surface_ = nullptr;
+  cairo_t* cr_ = nullptr;
+};
+
+}  // namespace
+
+std::unique_ptr<Painter> make_pdf_painter(std::ostream& out, const PaintOptions& options) {
+  return std::make_unique<PdfPainter>(out, options);
+}
+
+}  // namespace forme

@@ -1,0 +1,47 @@
+// SVG output: one page per file, text kept as glyph outlines Cairo defines
+// once and reuses.
+#include <cairo-svg.h>
+
+#include <stdexcept>
+
+#include "paint/cairo_stream.h"
+#include "paint/draw_cairo.h"
+#include "paint/painter.h"
+
+namespace forme {
+
+namespace {
+
+class SvgPainter final : public Painter {
+ public:
+  explicit SvgPainter(std::ostream& out) : out_(out) {}
+
+  void paint(const DisplayPage& page) override {
+    if (painted_) throw std::runtime_error("SVG holds one page; write a PDF for several");
+    painted_ = true;
+    cairo_surface_t* s = cairo_svg_surface_create_for_stream(write_to_ostream, &out_, page.width, page.height);
+    cairo_svg_surface_set_document_unit(s, CAIRO_SVG_UNIT_PT);
+    cairo_t* cr = cairo_create(s);
+    draw_page(cr, page);
+    cairo_status_t st = cairo_status(cr);
+    cairo_destroy(cr);
+    cairo_surface_finish(s);
+    cairo_status_t st2 = cairo_surface_status(s);
+    cairo_surface_destroy(s);
+    check_cairo(st, "SVG drawing");
+    check_cairo(st2, "SVG file");
+  }
+  void finish() override {}
+
+ private:
+  std::ostream& out_;
+  bool painted_ = false;
+};
+
+}  // namespace
+
+std::unique_ptr<Painter> make_svg_painter(std::ostream& out, const PaintOptions&) {
+  return std::make_unique<SvgPainter>(out);
+}
+
+}  // namespace forme
