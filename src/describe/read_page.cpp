@@ -3,6 +3,7 @@
 #include <filesystem>
 #include <sstream>
 
+#include "base/geometry.h"
 #include "describe/lengths.h"
 #include "describe/schema.h"
 #include "describe/validate.h"

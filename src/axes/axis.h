@@ -1,0 +1,41 @@
+#pragma once
+/// Stage 3, resolve scales: the axes every panel is drawn against.
+///
+/// Panels of a page share one scale per axis: the domain is the union of
+/// all panels' data (bars always include zero, because bar length encodes
+/// the value), and every panel gets the identical tick set.
+#include <string>
+#include <vector>
+
+#include "scale/number_format.h"
+#include "series/panel_data.h"
+
+namespace forme {
+
+struct Tick {
+  double value = 0;
+  std::string label;
+  bool major = false;  ///< date axes: first tick of a year (the year is drawn beneath)
+};
+
+struct Axis {
+  AxisKind kind = AxisKind::number;
+  double lo = 0, hi = 1;  ///< domain in data units (category axes: -0.5 .. n-0.5)
+  std::vector<Tick> ticks;
+  std::string title;      ///< axis title with its unit, ready to print
+  NumberFormat format;
+  std::vector<std::string> categories;
+  DatePrecision dates = DatePrecision::day;
+};
+
+struct PanelAxes {
+  Axis x, y;
+};
+
+/// One PanelAxes per panel, all sharing domains and ticks.
+std::vector<PanelAxes> resolve_axes(const std::vector<PanelData>& panels);
+
+/// "Title (unit)", "Title", "unit", or "".
+std::string axis_title(const std::string& title, const std::string& unit);
+
+}  // namespace forme

@@ -1,0 +1,104 @@
+#include "cli/render_job.h"
+
+#include <filesystem>
+#include <sstream>
+
+#include "axes/axis.h"
+#include "colour/palette.h"
+#include "data/csv_reader.h"
+#include "describe/read_page.h"
+#include "layout/layout_page.h"
+#include "layout/page_style.h"
+#include "paint/atomic_file.h"
+#include "series/select_series.h"
+
+namespace forme {
+
+namespace {
+
+PageStyle style_for(const PageSpec& spec, const std::string& font_dir) {
+  PageStyle st;
+  st.fonts = open_bundled_fonts(font_dir);
+  st.base = spec.type_size > 0 ? spec.type_size : base_size_for_sheet(spec.sheet.width, spec.sheet.height);
+  st.ink = Inks{ink::text, ink::muted, ink::rule, ink::grid, Rgb{1, 1, 1}};
+  st.series = default_categorical().colours;
+  return st;
+}
+
+std::vector<Table> load_tables(const PageSpec& spec) {
+  std::vector<Table> tables;
+  for (const auto& src : spec.tables) {
+    CsvOptions o;
+    o.declared = src.declared;
+    try {
+      tables.push_back(read_csv(src.path, src.display_path, o));
+    } catch (const InputError& e) {
+      // A file that cannot be opened is best reported where the page names it.
+      if (e.diagnostic().loc.line == 0) {
+        Diagnostic d = e.diagnostic();
+        d.message = "table '" + src.name + "' (" + src.display_path + "): " + d.message;
+        d.loc = src.loc;
+        throw InputError(d);
+      }
+      throw;
+    }
+    tables.back().name = src.name;
+  }
+  return tables;
+}
+
+DisplayPage make_page(const std::string& page_path, const std::string& font_dir, DiagnosticSink& sink) {
+  std::vector<Diagnostic> errors;
+  std::optional<PageSpec> spec = read_page(page_path, errors);      // 1. read description
+  if (!spec) {
+    for (auto& e : errors) sink.report(e);
+    throw InputError(errors.front());
+  }
+  std::vector<Table> tables = load_tables(*spec);                   // 2. load data
+  std::vector<PanelData> panels = select_series(*spec, tables, sink);
+  std::vector<PanelAxes> axes = resolve_axes(panels);               // 3. resolve scales
+  PageStyle style = style_for(*spec, font_dir);                     // 4. measure text (fonts)
+  return layout_page(*spec, panels, axes, style, sink);             // 5-6. lay out, place labels
+}
+
+}  // namespace
+
+std::string render_to_bytes(const std::string& page_path, OutputFormat format, const std::string& font_dir,
+                            double dpi, DiagnosticSink& warnings) {
+  DisplayPage page = make_page(page_path, font_dir, warnings);
+  std::ostringstream out;
+  PaintOptions po;
+  po.dpi = dpi;
+  po.info.title = page.title;
+  auto painter = make_painter(format, out, po);                     // 7. paint
+  painter->paint(page);
+  painter->finish();
+  return std::move(out).str();
+}
+
+RenderResult render_file(const RenderOptions& o) {
+  RenderResult r;
+  DiagnosticSink sink;
+  try {
+    auto format = format_for_path(o.output_path);
+    if (!format)
+      throw InputError(SourceLoc{o.output_path}, "unknown output type", "name the output .pdf, .svg or .png");
+    std::error_code ec;
+    if (std::filesystem::equivalent(o.output_path, o.page_path, ec))
+      throw InputError(SourceLoc{o.output_path}, "output would overwrite the page description");
+    std::string bytes = render_to_bytes(o.page_path, *format, o.font_dir, o.dpi, sink);
+    AtomicFile file(o.output_path);
+    file.write(bytes);
+    file.commit();
+    r.ok = true;
+  } catch (const InputError& e) {
+    if (sink.items().empty() || !sink.has_errors()) sink.report(e.diagnostic());
+  } catch (const std::exception& e) {
+    sink.report({Severity::error, SourceLoc{o.page_path}, std::string("internal error: ") + e.what(),
+                 "this is a bug in forme; please report it with the page description"});
+  }
+  r.diagnostics = sink.items();
+  return r;
+}
+
+}  // namespace forme

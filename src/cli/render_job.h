@@ -1,0 +1,32 @@
+#pragma once
+/// The driver: runs the stages of one render in order. Reading this file
+/// top to bottom is reading how a page is made.
+#include <optional>
+#include <string>
+#include <vector>
+
+#include "base/diagnostic.h"
+#include "paint/painter.h"
+
+namespace forme {
+
+struct RenderOptions {
+  std::string page_path;
+  std::string output_path;
+  double dpi = 150;
+  std::string font_dir;  ///< bundled fonts folder
+};
+
+struct RenderResult {
+  std::vector<Diagnostic> diagnostics;  ///< errors and warnings, in order found
+  bool ok = false;
+};
+
+/// Renders a page description to a file; never throws for bad input.
+RenderResult render_file(const RenderOptions& options);
+
+/// Renders to bytes in memory (tests, fuzzing). Throws InputError.
+std::string render_to_bytes(const std::string& page_path, OutputFormat format, const std::string& font_dir,
+                            double dpi, DiagnosticSink& warnings);
+
+}  // namespace forme

@@ -1,0 +1,125 @@
+#include "layout/axis_marks.h"
+
+#include <algorithm>
+#include <cmath>
+
+#include "data/dates.h"
+#include "layout/text_items.h"
+#include "text/wrap.h"
+
+namespace forme {
+
+namespace {
+constexpr double kLeading = 1.2;
+
+bool is_value_axis(const Axis& a) { return a.kind == AxisKind::number; }
+
+PathItem segment(Point a, Point b, const Stroke& s) {
+  PathItem p;
+  p.points = {a, b};
+  p.stroke = s;
+  return p;
+}
+}  // namespace
+
+std::vector<ShapedText> shape_tick_labels(const Axis& axis, const PageStyle& st) {
+  ShapeOptions o;
+  o.tabular_figures = axis.kind != AxisKind::category;
+  std::vector<ShapedText> out;
+  for (const auto& t : axis.ticks) out.push_back(shape_text(t.label, st.fonts.regular, st.label_size(), o));
+  return out;
+}
+
+double widest(const std::vector<ShapedText>& labels) {
+  double w = 0;
+  for (const auto& l : labels) w = std::max(w, l.width);
+  return w;
+}
+
+int label_stride(const Axis& axis, const std::vector<ShapedText>& labels, double length, double gap) {
+  if (axis.ticks.size() < 2 || axis.kind == AxisKind::category) return 1;
+  const double spacing = length * (axis.ticks[1].value - axis.ticks[0].value) / (axis.hi - axis.lo);
+  if (spacing <= 0) return 1;
+  return std::max(1, static_cast<int>(std::ceil((widest(labels) + gap) / spacing)));
+}
+
+double x_label_band(const Axis& x, const PageStyle& st, const std::vector<ShapedText>& labels,
+                    double category_width) {
+  const double line = st.label_size() * kLeading;
+  double lines = 1;
+  if (x.kind == AxisKind::date)
+    for (const auto& t : x.ticks)
+      if (t.major) lines = 2;
+  if (x.kind == AxisKind::category)
+    for (const auto& t : x.ticks)
+      lines = std::max(lines, static_cast<double>(
+                                  wrap_text(t.label, st.fonts.regular, st.label_size(), category_width).size()));
+  (void)labels;
+  return st.tick_length() + st.base * 0.3 + line * lines;
+}
+
+void draw_axis_backdrop(const PlotFrame& f, const PageStyle& st, DisplayPage& page) {
+  const Stroke grid{st.ink.grid, st.rule_width(), {}, false};
+  const Stroke rule{st.ink.rule, st.rule_width() * 1.6, {}, false};
+  if (is_value_axis(f.y)) {
+    for (const auto& t : f.y.ticks)
+      if (t.value != 0) page.add(segment({f.plot.left(), f.py(t.value)}, {f.plot.right(), f.py(t.value)}, grid));
+    if (f.y.lo <= 0 && f.y.hi >= 0)
+      page.add(segment({f.plot.left(), f.py(0)}, {f.plot.right(), f.py(0)}, rule));
+    else  // no zero in view: a plain axis line marks the bottom of the plot
+      page.add(segment({f.plot.left(), f.plot.bottom()}, {f.plot.right(), f.plot.bottom()}, rule));
+  }
+  if (is_value_axis(f.x) && f.y.kind == AxisKind::category) {
+    for (const auto& t : f.x.ticks)
+      if (t.value != 0) page.add(segment({f.px(t.value), f.plot.top()}, {f.px(t.value), f.plot.bottom()}, grid));
+    if (f.x.lo <= 0 && f.x.hi >= 0) page.add(segment({f.px(0), f.plot.top()}, {f.px(0), f.plot.bottom()}, rule));
+  }
+  if (is_value_axis(f.x) && is_value_axis(f.y)) {
+    for (const auto& t : f.x.ticks)
+      page.add(segment({f.px(t.value), f.plot.top()}, {f.px(t.value), f.plot.bottom()}, grid));
+  }
+}
+
+void draw_axis_labels(const PlotFrame& f, const PageStyle& st, const AxisLabelling& which, DisplayPage& page) {
+  const Stroke tick{st.ink.rule, st.rule_width() * 1.6, {}, false};
+  const double tl = st.tick_length();
+  const double pad = st.base * 0.3;
+
+  // x axis: ticks below the plot for dates and numbers; labels under them.
+  if (which.x_labels) {
+    auto labels = shape_tick_labels(f.x, st);
+    const int stride = label_stride(f.x, labels, f.plot.w, st.base * 0.8);
+    const double baseline = f.plot.bottom() + tl + pad + st.label_size() * 0.8;
+    for (std::size_t i = 0; i < f.x.ticks.size(); ++i) {
+      const Tick& t = f.x.ticks[i];
+      const double x = f.px(t.value);
+      if (f.x.kind != AxisKind::category)
+        page.add(segment({x, f.plot.bottom()}, {x, f.plot.bottom() + tl}, tick));
+      if (i % static_cast<std::size_t>(stride) != 0) continue;
+      if (f.x.kind == AxisKind::category) {
+        double y = baseline;
+        for (auto& line : wrap_text(t.label, st.fonts.regular, st.label_size(), f.band_x() * 0.95)) {
+          page.add(text_at(line, x, y, Align::centre, st.ink.muted, TextRole::tick_label));
+          y += st.label_size() * kLeading;
+        }
+      } else {
+        page.add(text_at(labels[i], x, baseline, Align::centre, st.ink.muted, TextRole::tick_label));
+        if (t.major && f.x.kind == AxisKind::date) {
+          const std::string year = std::to_string(civil_from_days(static_cast<long>(std::floor(t.value))).year);
+          ShapeOptions o;
+          o.tabular_figures = true;
+          page.add(text_at(shape_text(year, st.fonts.regular, st.label_size(), o), x,
+                           baseline + st.label_size() * kLeading, Align::centre, st.ink.muted, TextRole::tick_label));
+        }
+      }
+    }
+  }
+  if (which.y_labels) {
+    auto labels = shape_tick_labels(f.y, st);
+    for (std::size_t i = 0; i < f.y.ticks.size(); ++i)
+      page.add(text_mid(labels[i], f.plot.left() - pad, f.py(f.y.ticks[i].value), Align::right,
+                        f.y.kind == AxisKind::category ? st.ink.text : st.ink.muted, TextRole::tick_label));
+  }
+}
+
+}  // namespace forme

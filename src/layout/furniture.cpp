@@ -1,0 +1,67 @@
+#include "layout/furniture.h"
+
+#include "layout/text_items.h"
+#include "text/wrap.h"
+
+namespace forme {
+
+namespace {
+// Leading (baseline to baseline) as a multiple of the type size.
+constexpr double kLeading = 1.25;
+}  // namespace
+
+double set_heading(const PageSpec& spec, const PageStyle& st, const Rect& content, DisplayPage& page) {
+  double y = content.y;
+  bool any = false;
+  if (!spec.title.empty()) {
+    const double size = st.title_size();
+    for (auto& line : wrap_text(spec.title, st.fonts.bold, size, content.w)) {
+      y += line.ascent;
+      page.add(text_at(line, content.x, y, Align::left, st.ink.text, TextRole::title));
+      y += size * kLeading - line.ascent;
+    }
+    any = true;
+  }
+  if (!spec.standfirst.empty()) {
+    const double size = st.standfirst_size();
+    y += any ? size * 0.2 : 0;
+    // A measure of about 80 characters reads comfortably (common practice).
+    const double measure = std::min(content.w, size * 0.5 * 80);
+    for (auto& line : wrap_text(spec.standfirst, st.fonts.regular, size, measure)) {
+      y += line.ascent;
+      page.add(text_at(line, content.x, y, Align::left, st.ink.muted, TextRole::standfirst));
+      y += size * kLeading - line.ascent;
+    }
+    any = true;
+  }
+  if (any) y += st.base * 1.6;
+  return y - content.y;
+}
+
+double set_footer(const PageSpec& spec, const PageStyle& st, const Rect& content, DisplayPage& page,
+                  const std::vector<std::string>& extra_notes) {
+  const double size = st.note_size();
+  std::vector<std::pair<ShapedText, TextRole>> lines;
+  auto add = [&](const std::string& text, TextRole role, const FontRef& font) {
+    for (auto& l : wrap_text(text, font, size, content.w)) lines.emplace_back(std::move(l), role);
+  };
+  for (const auto& n : spec.notes) add(n, TextRole::note, st.fonts.regular);
+  for (const auto& n : extra_notes) add(n, TextRole::note, st.fonts.regular);
+  if (!spec.source.empty()) add(spec.source, TextRole::source, st.fonts.regular);
+  if (lines.empty()) return 0;
+  const double leading = size * kLeading;
+  const double height = leading * static_cast<double>(lines.size());
+  double y = content.bottom() - height;
+  // A hairline separates the footer from the charts above it.
+  PathItem rule;
+  rule.points = {{content.x, y - st.base * 0.6}, {content.right(), y - st.base * 0.6}};
+  rule.stroke = Stroke{st.ink.grid, st.rule_width(), {}, false};
+  page.add(std::move(rule));
+  for (auto& [line, role] : lines) {
+    page.add(text_at(line, content.x, y + line.ascent, Align::left, st.ink.muted, role));
+    y += leading;
+  }
+  return height + st.base * 1.6;
+}
+
+}  // namespace forme

@@ -1,0 +1,20 @@
+#pragma once
+/// Page furniture: the heading (title, standfirst) at the top of the
+/// content area and the footer (source line, notes) at its foot.
+#include "base/geometry.h"
+#include "describe/page_spec.h"
+#include "layout/page_style.h"
+#include "paint/display_list.h"
+
+namespace forme {
+
+/// Sets the heading from the top of `content`; returns the height used
+/// (including the space after it).
+double set_heading(const PageSpec& spec, const PageStyle& style, const Rect& content, DisplayPage& page);
+
+/// Sets source and notes against the bottom of `content`; returns the
+/// height used (including the space above it).
+double set_footer(const PageSpec& spec, const PageStyle& style, const Rect& content, DisplayPage& page,
+                  const std::vector<std::string>& extra_notes);
+
+}  // namespace forme

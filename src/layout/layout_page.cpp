@@ -1,0 +1,154 @@
+#include "layout/layout_page.h"
+
+#include <algorithm>
+#include <cmath>
+
+#include "layout/axis_marks.h"
+#include "layout/furniture.h"
+#include "layout/grid_shape.h"
+#include "layout/marks/marks.h"
+#include "layout/text_items.h"
+
+namespace forme {
+
+namespace {
+
+// Small multiples larger than 2 × 2 label only their outer edges: the scale
+// is shared, so inner panels repeat nothing the reader needs.
+bool outer_labels_only(const GridShape& g) { return g.columns * g.rows > 4; }
+
+SeriesColours colour_series(const std::vector<PanelData>& panels, const PageStyle& st) {
+  SeriesColours out;
+  std::size_t next = 0;
+  for (const auto& p : panels)
+    for (const auto& s : p.series)
+      if (!out.count(s.name)) out[s.name] = st.series[next++ % st.series.size()];
+  return out;
+}
+
+// Everything that is measured once for the whole grid, so every panel gets
+// the same inner box.
+struct GridMeasure {
+  double y_label_width = 0;  ///< widest y tick label (or category name)
+  double x_band = 0;         ///< height of the x tick label band
+  double x_title = 0;        ///< height of the x axis title line
+  double top = 0;            ///< panel title + y title lines
+  double right = 0;          ///< line-end labels or overhang of the last x label
+};
+
+GridMeasure measure_grid(const std::vector<PanelData>& panels, const std::vector<PanelAxes>& axes,
+                         const PageStyle& st, double est_plot_width) {
+  GridMeasure m;
+  bool any_title = false, any_ytitle = false, any_xtitle = false;
+  double last_x_half = 0;
+  for (std::size_t i = 0; i < panels.size(); ++i) {
+    const PanelAxes& a = axes[i];
+    auto ylabels = shape_tick_labels(a.y, st);
+    // Category names may not take more than 40% of a panel's width.
+    m.y_label_width = std::max(m.y_label_width, std::min(widest(ylabels), est_plot_width * 0.4));
+    auto xlabels = shape_tick_labels(a.x, st);
+    double cat_w = a.x.kind == AxisKind::category ? est_plot_width / std::max<std::size_t>(1, a.x.categories.size()) * 0.95 : 0;
+    m.x_band = std::max(m.x_band, x_label_band(a.x, st, xlabels, cat_w));
+    if (!xlabels.empty() && a.x.kind != AxisKind::category) last_x_half = std::max(last_x_half, xlabels.back().width / 2);
+    any_title |= !panels[i].title.empty();
+    any_ytitle |= !a.y.title.empty() && a.y.kind != AxisKind::category;
+    any_xtitle |= !a.x.title.empty();
+  }
+  const double line = st.label_size() * 1.25;
+  m.top = (any_title ? st.panel_title_size() * 1.4 : 0) + (any_ytitle ? line : 0) + st.base * 0.5;
+  m.x_title = any_xtitle ? line + st.base * 0.2 : 0;
+  m.right = std::max(marks_right_inset(panels.front().kind, panels, st), last_x_half) + st.base * 0.2;
+  return m;
+}
+
+}  // namespace
+
+DisplayPage layout_page(const PageSpec& spec, const std::vector<PanelData>& panels,
+                        const std::vector<PanelAxes>& axes, const PageStyle& st, DiagnosticSink& warnings) {
+  DisplayPage page;
+  page.width = spec.sheet.width;
+  page.height = spec.sheet.height;
+  page.title = spec.title;
+  const Margins& mg = spec.sheet.margins;
+  Rect content{mg.left, mg.top, page.width - mg.left - mg.right, page.height - mg.top - mg.bottom};
+
+  const double head = set_heading(spec, st, content, page);
+  const double foot = set_footer(spec, st, content, page, {});
+  Rect area{content.x, content.y + head, content.w, content.h - head - foot};
+
+  const GridShape g = grid_shape(spec.grid, static_cast<int>(panels.size()));
+  const bool outer = outer_labels_only(g);
+  const double gap = spec.grid.gap > 0 ? spec.grid.gap : st.base * 2.2;
+  const double est_w = (area.w - gap * (g.columns - 1)) / g.columns;
+  const GridMeasure m = measure_grid(panels, axes, st, est_w * 0.8);
+  const double pad = st.base * 0.3;
+
+  // Column c's left inset holds y labels; row r's bottom inset holds x labels.
+  auto shows_y = [&](int c) { return !outer || c == 0; };
+  auto shows_x = [&](int index) {
+    if (!outer) return true;
+    return index + g.columns >= static_cast<int>(panels.size());  // nothing below it
+  };
+  std::vector<double> left(static_cast<std::size_t>(g.columns)), bottom(static_cast<std::size_t>(g.rows));
+  double sum_left = 0, sum_bottom = 0;
+  for (int c = 0; c < g.columns; ++c) sum_left += left[static_cast<std::size_t>(c)] = shows_y(c) ? m.y_label_width + pad : 0;
+  for (int r = 0; r < g.rows; ++r) {
+    bool any = false;
+    for (int c = 0; c < g.columns; ++c) {
+      int i = r * g.columns + c;
+      if (i < static_cast<int>(panels.size()) && shows_x(i)) any = true;
+    }
+    sum_bottom += bottom[static_cast<std::size_t>(r)] = any ? m.x_band + m.x_title : st.base * 0.4;
+  }
+  const double plot_w = (area.w - sum_left - g.columns * m.right - gap * (g.columns - 1)) / g.columns;
+  const double plot_h = (area.h - sum_bottom - g.rows * m.top - gap * (g.rows - 1)) / g.rows;
+  if (plot_w < st.base * 4 || plot_h < st.base * 4)
+    throw InputError(spec.grid.loc,
+                     "the panels do not fit: each plot would be " + std::to_string(static_cast<int>(plot_w)) + " × " +
+                         std::to_string(static_cast<int>(plot_h)) + " pt",
+                     "use a larger sheet, fewer panels, smaller margins or a shorter heading");
+
+  const SeriesColours colours = colour_series(panels, st);
+  const bool name_series = [&] {
+    for (const auto& p : panels)
+      if (p.series.size() > 1) return true;
+    return false;
+  }();
+
+  for (std::size_t i = 0; i < panels.size(); ++i) {
+    const int c = static_cast<int>(i) % g.columns, r = static_cast<int>(i) / g.columns;
+    double x = area.x, y = area.y;
+    for (int k = 0; k < c; ++k) x += left[static_cast<std::size_t>(k)] + plot_w + m.right + gap;
+    for (int k = 0; k < r; ++k) y += m.top + plot_h + bottom[static_cast<std::size_t>(k)] + gap;
+    const double cell_left = x;
+    x += left[static_cast<std::size_t>(c)];
+    y += m.top;
+    PlotFrame f{{x, y, plot_w, plot_h}, axes[i].x, axes[i].y};
+
+    // Panel title, then the y axis title with its unit, above the plot.
+    double ty = y - m.top;
+    if (!panels[i].title.empty()) {
+      auto t = shape_text(panels[i].title, st.fonts.bold, st.panel_title_size());
+      ty += t.ascent;
+      page.add(text_at(std::move(t), cell_left, ty, Align::left, st.ink.text, TextRole::panel_title));
+      ty += st.panel_title_size() * 1.4 - st.panel_title_size() * st.fonts.bold->ascent_em();
+    }
+    if (!f.y.title.empty() && f.y.kind != AxisKind::category && shows_y(c)) {
+      auto t = shape_text(f.y.title, st.fonts.regular, st.label_size());
+      page.add(text_at(std::move(t), cell_left, ty + st.label_size() * 0.9, Align::left, st.ink.muted, TextRole::axis_title));
+    }
+
+    draw_axis_backdrop(f, st, page);
+    draw_marks(MarkContext{panels[i], f, st, colours, name_series}, page);
+    draw_axis_labels(f, st, AxisLabelling{shows_x(static_cast<int>(i)), shows_y(c)}, page);
+    if (!f.x.title.empty() && shows_x(static_cast<int>(i))) {
+      auto t = shape_text(f.x.title, st.fonts.regular, st.label_size());
+      page.add(text_at(std::move(t), f.plot.cx(), f.plot.bottom() + m.x_band + st.label_size() * 0.9,
+                       Align::centre, st.ink.muted, TextRole::axis_title));
+    }
+  }
+  (void)warnings;
+  return page;
+}
+
+}  // namespace forme

@@ -1,0 +1,21 @@
+#pragma once
+/// Stage 5, lay out boxes: page furniture (heading, footer), the panel grid
+/// with one shared inner box size, axes, ticks, marks and direct labels,
+/// all as a display list in page coordinates.
+#include <vector>
+
+#include "axes/axis.h"
+#include "base/diagnostic.h"
+#include "describe/page_spec.h"
+#include "layout/page_style.h"
+#include "paint/display_list.h"
+#include "series/panel_data.h"
+
+namespace forme {
+
+/// Lays out one page. Problems that make the page unreadable (a grid too
+/// small for its panels) throw InputError located in the description.
+DisplayPage layout_page(const PageSpec& spec, const std::vector<PanelData>& panels,
+                        const std::vector<PanelAxes>& axes, const PageStyle& style, DiagnosticSink& warnings);
+
+}  // namespace forme

@@ -1,0 +1,37 @@
+#pragma once
+/// Marks for each chart kind. Adding a chart kind means adding one file in
+/// this folder and one case in marks.cpp.
+#include <map>
+#include <string>
+
+#include "layout/page_style.h"
+#include "layout/plot_frame.h"
+#include "paint/display_list.h"
+#include "series/panel_data.h"
+
+namespace forme {
+
+/// Colours by series name, the same in every panel of the page.
+using SeriesColours = std::map<std::string, Rgb>;
+
+struct MarkContext {
+  const PanelData& data;
+  const PlotFrame& frame;
+  const PageStyle& style;
+  const SeriesColours& colours;
+  bool label_series = false;  ///< name series directly (line ends, …)
+};
+
+/// Space a chart kind needs beside the plot for its own labels (line-end
+/// labels on the right), given the page's series names.
+double marks_right_inset(ChartKind kind, const std::vector<PanelData>& panels, const PageStyle& style);
+
+/// Draws the data of one panel.
+void draw_marks(const MarkContext& ctx, DisplayPage& page);
+
+void draw_line_marks(const MarkContext& ctx, DisplayPage& page);
+void draw_vertical_bar_marks(const MarkContext& ctx, DisplayPage& page);
+void draw_horizontal_bar_marks(const MarkContext& ctx, DisplayPage& page);
+void draw_dot_marks(const MarkContext& ctx, DisplayPage& page);
+
+}  // namespace forme

@@ -1,0 +1,41 @@
+#pragma once
+/// Sizes and inks a page is set in. Everything scales from one base type
+/// size, so a poster and a journal figure keep the same proportions.
+#include <vector>
+
+#include "colour/rgb.h"
+#include "text/font.h"
+
+namespace forme {
+
+struct Inks {
+  Rgb text;    ///< titles and labels
+  Rgb muted;   ///< tick labels, axis titles, notes (still ≥ 4.5:1 on paper)
+  Rgb rule;    ///< baselines and axis lines
+  Rgb grid;    ///< gridlines: light, behind the data
+  Rgb paper;
+};
+
+struct PageStyle {
+  FontSet fonts;
+  double base = 8;  ///< base type size in points
+  Inks ink;
+  std::vector<Rgb> series;  ///< colours for series, in order of first appearance
+
+  double title_size() const { return base * 2.0; }
+  double standfirst_size() const { return base * 1.25; }
+  double panel_title_size() const { return base * 1.1; }
+  double label_size() const { return base; }
+  double note_size() const { return base * 0.9 < 6 ? 6 : base * 0.9; }
+  double line_width() const { return base * 0.19; }   ///< data lines
+  double rule_width() const { return base * 0.07; }   ///< gridlines and ticks
+  double tick_length() const { return base * 0.35; }
+  double dot_radius() const { return base * 0.3; }
+};
+
+/// Base type size for a sheet: 8 pt on A4/Letter, growing with the square
+/// root of the sheet's area (common practice: text scales with viewing
+/// distance, which grows more slowly than sheet area). Never below 6 pt.
+double base_size_for_sheet(double width_pt, double height_pt);
+
+}  // namespace forme

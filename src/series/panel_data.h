@@ -1,0 +1,33 @@
+#pragma once
+/// Stage 2b: the rows each panel shows, grouped into series. Positions are
+/// still in data units; categories are indices into `categories`.
+#include <string>
+#include <vector>
+
+#include "data/table.h"
+#include "describe/page_spec.h"
+
+namespace forme {
+
+/// What kind of values run along an axis.
+enum class AxisKind { number, date, category };
+
+struct Series {
+  std::string name;       ///< empty for a panel with one unnamed series
+  std::vector<double> x;  ///< data value, day number, or category index
+  std::vector<double> y;
+};
+
+struct PanelData {
+  const PanelSpec* spec = nullptr;
+  std::string title;
+  ChartKind kind = ChartKind::line;
+  AxisKind x_kind = AxisKind::number, y_kind = AxisKind::number;
+  DatePrecision x_dates = DatePrecision::day;  ///< when x_kind is date
+  /// Category names in order of first appearance, for the category axis.
+  std::vector<std::string> categories;
+  std::vector<Series> series;
+  std::size_t rows_used = 0;
+};
+
+}  // namespace forme

@@ -1,0 +1,197 @@
+#include "series/select_series.h"
+
+#include <algorithm>
+#include <cmath>
+#include <map>
+
+#include "describe/suggest.h"
+
+namespace forme {
+
+namespace {
+
+const Table& find_table(const PageSpec& page, const std::vector<Table>& tables, const PanelSpec& p) {
+  if (p.table.empty()) {
+    if (tables.size() == 1) return tables[0];
+    throw InputError(p.loc, "panel does not say which table it shows", "add 'table:' naming one of the tables");
+  }
+  for (const auto& t : tables)
+    if (t.name == p.table.value) return t;
+  std::vector<std::string> names;
+  for (const auto& t : page.tables) names.push_back(t.name);
+  auto near = nearest(p.table.value, names);
+  throw InputError(p.table.loc, "no table named '" + p.table.value + "'",
+                   near ? "did you mean '" + *near + "'?" : "tables are declared under 'tables'");
+}
+
+const Column& find_column(const Table& t, const Located& name, const char* role) {
+  if (const Column* c = t.find(name.value)) return *c;
+  std::vector<std::string> names;
+  for (const auto& c : t.columns) names.push_back(c.name);
+  auto near = nearest(name.value, names);
+  std::string all;
+  for (std::size_t i = 0; i < names.size() && i < 12; ++i) all += (i ? ", " : "") + names[i];
+  throw InputError(name.loc, std::string("table '") + t.name + "' has no column '" + name.value + "' for " + role,
+                   near ? "did you mean '" + *near + "'?" : "its columns are: " + all);
+}
+
+AxisKind kind_of(const Column& c) {
+  switch (c.type) {
+    case ColumnType::number: return AxisKind::number;
+    case ColumnType::date: return AxisKind::date;
+    case ColumnType::text: return AxisKind::category;
+  }
+  return AxisKind::category;
+}
+
+// The panel's category axis: x for vertical bars, y for horizontal bars
+// and dot strips. Line charts have none.
+bool x_is_category(const PanelSpec& p, const Column& x) {
+  return p.kind == ChartKind::vertical_bar || (p.kind != ChartKind::horizontal_bar && x.type == ColumnType::text);
+}
+bool y_is_category(const PanelSpec& p, const Column& y) {
+  return p.kind == ChartKind::horizontal_bar || (p.kind == ChartKind::dot && y.type == ColumnType::text);
+}
+
+PanelData build_panel(const PanelSpec& p, const Table& t, const std::vector<std::size_t>& rows,
+                      std::string title) {
+  if (p.x.empty()) throw InputError(p.loc, "panel has no 'x' column", "name the column for the horizontal position");
+  if (p.y.empty()) throw InputError(p.loc, "panel has no 'y' column", "name the column for the vertical position");
+  const Column& xc = find_column(t, p.x, "x");
+  const Column& yc = find_column(t, p.y, "y");
+  const Column* sc = p.series_by.empty() ? nullptr : &find_column(t, p.series_by, "series-by");
+
+  PanelData d;
+  d.spec = &p;
+  d.kind = p.kind;
+  d.title = std::move(title);
+  const bool xcat = x_is_category(p, xc), ycat = y_is_category(p, yc);
+  d.x_kind = xcat ? AxisKind::category : kind_of(xc);
+  d.y_kind = ycat ? AxisKind::category : kind_of(yc);
+  d.x_dates = xc.date_precision;
+  if (d.x_kind == AxisKind::category && d.y_kind == AxisKind::category)
+    throw InputError(p.y.loc, "both axes of this panel would be categories",
+                     "one of 'x' and 'y' must be a number column");
+  const Column& value_col = d.y_kind == AxisKind::category ? xc : yc;
+  const Located& value_name = d.y_kind == AxisKind::category ? p.x : p.y;
+  if (value_col.type != ColumnType::number)
+    throw InputError(value_name.loc, "column '" + value_col.name + "' holds " +
+                                         (value_col.type == ColumnType::date ? "dates" : "text") +
+                                         ", but this axis needs numbers",
+                     "declare its type under the table's 'types' if it was misread");
+
+  std::map<std::string, std::size_t> cat_index, series_index;
+  auto category = [&](const std::string& name) {
+    auto [it, fresh] = cat_index.emplace(name, d.categories.size());
+    if (fresh) d.categories.push_back(name);
+    return static_cast<double>(it->second);
+  };
+  for (std::size_t r : rows) {
+    std::string sname = sc ? sc->text[r] : std::string();
+    auto [it, fresh] = series_index.emplace(sname, d.series.size());
+    if (fresh) d.series.push_back(Series{sname, {}, {}});
+    Series& s = d.series[it->second];
+    double x = d.x_kind == AxisKind::category ? category(xc.text[r]) : xc.values[r];
+    double y = d.y_kind == AxisKind::category ? category(yc.text[r]) : yc.values[r];
+    if (std::isnan(x) || std::isnan(y)) continue;  // missing cell: a gap, not a zero
+    s.x.push_back(x);
+    s.y.push_back(y);
+    ++d.rows_used;
+  }
+  // Lines are drawn in x order whatever order the file had (for text
+  // categories, their order of first appearance: an ordinal scale).
+  if (p.kind == ChartKind::line)
+    for (auto& s : d.series) {
+      std::vector<std::size_t> idx(s.x.size());
+      for (std::size_t i = 0; i < idx.size(); ++i) idx[i] = i;
+      std::stable_sort(idx.begin(), idx.end(), [&](auto a, auto b) { return s.x[a] < s.x[b]; });
+      Series sorted{s.name, {}, {}};
+      for (auto i : idx) {
+        sorted.x.push_back(s.x[i]);
+        sorted.y.push_back(s.y[i]);
+      }
+      s = std::move(sorted);
+    }
+  return d;
+}
+
+std::vector<std::size_t> filter_rows(const PanelSpec& p, const Table& t) {
+  std::vector<const Column*> cols;
+  for (const auto& [name, value] : p.where) cols.push_back(&find_column(t, name, "a row filter"));
+  std::vector<std::size_t> rows;
+  for (std::size_t r = 0; r < t.rows; ++r) {
+    bool keep = true;
+    for (std::size_t i = 0; i < cols.size() && keep; ++i) keep = cols[i]->text[r] == p.where[i].second;
+    if (keep) rows.push_back(r);
+  }
+  return rows;
+}
+
+// Panels of one grid are read against one scale, so a category axis lists
+// the same categories in the same order in every panel.
+// Only panels showing the same columns with the same kind are shared.
+void share_categories(std::vector<PanelData>& panels) {
+  auto key = [](const PanelData& p) {
+    return std::to_string(static_cast<int>(p.kind)) + '\x1f' + p.spec->x.value + '\x1f' + p.spec->y.value;
+  };
+  std::map<std::string, std::vector<std::string>> all;
+  std::map<std::string, std::map<std::string, std::size_t>> index;
+  for (const auto& d : panels)
+    for (const auto& c : d.categories)
+      if (index[key(d)].emplace(c, all[key(d)].size()).second) all[key(d)].push_back(c);
+  for (auto& d : panels) {
+    if (d.categories.empty()) continue;
+    auto& idx = index[key(d)];
+    for (auto& s : d.series) {
+      auto& v = d.x_kind == AxisKind::category ? s.x : s.y;
+      for (auto& c : v) c = static_cast<double>(idx[d.categories[static_cast<std::size_t>(c)]]);
+    }
+    d.categories = all[key(d)];
+  }
+}
+
+}  // namespace
+
+std::vector<PanelData> select_series(const PageSpec& page, const std::vector<Table>& tables,
+                                     DiagnosticSink& warnings) {
+  std::vector<PanelData> out;
+  if (!page.grid.one_panel_per.empty()) {
+    const PanelSpec& tmpl = page.panels.front();
+    const Table& t = find_table(page, tables, tmpl);
+    const Column& by = find_column(t, page.grid.one_panel_per, "one-panel-per");
+    std::vector<std::size_t> rows = filter_rows(tmpl, t);
+    std::vector<std::string> values;
+    std::map<std::string, std::vector<std::size_t>> groups;
+    for (std::size_t r : rows) {
+      auto [it, fresh] = groups.try_emplace(by.text[r]);
+      if (fresh) values.push_back(by.text[r]);
+      it->second.push_back(r);
+    }
+    if (!page.grid.order.empty()) {
+      for (const auto& v : page.grid.order)
+        if (!groups.count(v))
+          throw InputError(page.grid.loc, "grid order names '" + v + "', which is not a value of column '" + by.name + "'");
+      std::vector<std::string> rest;
+      for (const auto& v : values)
+        if (std::find(page.grid.order.begin(), page.grid.order.end(), v) == page.grid.order.end()) rest.push_back(v);
+      values = page.grid.order;
+      values.insert(values.end(), rest.begin(), rest.end());
+    }
+    for (const auto& v : values) out.push_back(build_panel(tmpl, t, groups[v], v));
+  } else {
+    for (const auto& p : page.panels) {
+      const Table& t = find_table(page, tables, p);
+      out.push_back(build_panel(p, t, filter_rows(p, t), p.title));
+    }
+  }
+  share_categories(out);
+  for (const auto& d : out) {
+    if (d.rows_used == 0)
+      warnings.warn(d.spec->loc, "panel '" + d.title + "' has no data to show",
+                    "check its 'where' filter and the table's contents");
+  }
+  if (out.empty()) throw InputError(page.grid.one_panel_per.loc, "no panels: the table has no rows to split");
+  return out;
+}
+
+}  // namespace forme

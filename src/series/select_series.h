@@ -1,0 +1,19 @@
+#pragma once
+/// Turns the page's panels and loaded tables into `PanelData`: expands
+/// one-panel-per grids, applies row filters, groups rows into series and
+/// checks that every column the description names exists with a usable type.
+#include <vector>
+
+#include "base/diagnostic.h"
+#include "data/table.h"
+#include "describe/page_spec.h"
+#include "series/panel_data.h"
+
+namespace forme {
+
+/// Throws InputError located at the description value that is wrong
+/// (a missing column at its `x:` / `y:` value, …).
+std::vector<PanelData> select_series(const PageSpec& page, const std::vector<Table>& tables,
+                                     DiagnosticSink& warnings);
+
+}  // namespace forme
