@@ -16,7 +16,8 @@
 /// - OKLab: B. Ottosson, "A perceptual color space for image processing"
 ///   (2020, matrices as updated 2021-01-25). The linear-sRGB path uses the
 ///   post's sRGB→LMS matrices; the XYZ path uses its M1/M2. The two paths
-///   agree to about 1e-4, the precision the post itself publishes.
+///   agree within 2e-4 (M1 assumes a slightly different D65 white), below
+///   what the post itself publishes (three decimals).
 #include <string>
 
 #include "colour/rgb.h"

@@ -1,12 +1,12 @@
 #include "colour/parse.h"
 
-#include <algorithm>
 #include <charconv>
 #include <cmath>
 #include <vector>
 
 #include "colour/convert.h"
 #include "colour/palette.h"
+#include "describe/suggest.h"
 
 namespace forme {
 namespace {
@@ -128,34 +128,10 @@ ParsedColour parse_oklch(std::string_view text) {
   return {from_oklch({*l, *c, hue}), {}, {}};
 }
 
-std::size_t edit_distance(std::string_view a, std::string_view b) {
-  std::vector<std::size_t> row(b.size() + 1);
-  for (std::size_t j = 0; j <= b.size(); ++j) row[j] = j;
-  for (std::size_t i = 1; i <= a.size(); ++i) {
-    std::size_t diagonal = row[0];
-    row[0] = i;
-    for (std::size_t j = 1; j <= b.size(); ++j) {
-      std::size_t up = row[j];
-      row[j] = std::min({row[j] + 1, row[j - 1] + 1, diagonal + (a[i - 1] == b[j - 1] ? 0 : 1)});
-      diagonal = up;
-    }
-  }
-  return row[b.size()];
-}
-
-/// "did you mean 'x'?" for the nearest candidate within a small edit
-/// distance, else empty.
-std::string suggest(std::string_view word, const std::vector<std::string_view>& candidates) {
-  std::string_view best;
-  std::size_t best_d = std::max<std::size_t>(2, word.size() / 3) + 1;
-  for (std::string_view c : candidates) {
-    std::size_t d = edit_distance(word, c);
-    if (d < best_d) {
-      best_d = d;
-      best = c;
-    }
-  }
-  return best.empty() ? std::string() : "did you mean " + quote(best) + "?";
+/// "did you mean 'x'?" for a likely typo of one of `candidates`, else empty.
+std::string suggest(std::string_view word, const std::vector<std::string>& candidates) {
+  std::optional<std::string> near = nearest(word, candidates);
+  return near ? "did you mean " + quote(*near) + "?" : std::string();
 }
 
 ParsedColour parse_name(std::string_view text) {
@@ -164,10 +140,10 @@ ParsedColour parse_name(std::string_view text) {
   std::string_view item = dot == std::string_view::npos ? std::string_view() : text.substr(dot + 1);
 
   if (group == "ink") {
-    std::vector<std::string_view> names;
+    std::vector<std::string> names;
     for (const NamedInk& ink : named_inks) {
       if (ink.name == item) return {ink.colour, {}, {}};
-      names.push_back(ink.name);
+      names.emplace_back(ink.name);
     }
     std::string hint = suggest(item, names);
     if (hint.empty()) hint = "the inks are ink.text, ink.muted, ink.rule and ink.grid";
@@ -176,7 +152,7 @@ ParsedColour parse_name(std::string_view text) {
 
   const Palette* palette = find_palette(group);
   if (!palette) {
-    std::vector<std::string_view> names = {"ink"};
+    std::vector<std::string> names = {"ink"};
     for (const Palette& p : all_palettes()) names.push_back(p.name);
     std::string hint = suggest(group, names);
     if (hint.empty()) hint = kForms;
