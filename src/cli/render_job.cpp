@@ -47,7 +47,9 @@ std::vector<Table> load_tables(const PageSpec& spec) {
   return tables;
 }
 
-DisplayPage make_page(const std::string& page_path, const std::string& font_dir, DiagnosticSink& sink) {
+}  // namespace
+
+DisplayPage compose_page(const std::string& page_path, const std::string& font_dir, DiagnosticSink& sink) {
   std::vector<Diagnostic> errors;
   std::optional<PageSpec> spec = read_page(page_path, errors);      // 1. read description
   if (!spec) {
@@ -61,11 +63,9 @@ DisplayPage make_page(const std::string& page_path, const std::string& font_dir,
   return layout_page(*spec, panels, axes, style, sink);             // 5-6. lay out, place labels
 }
 
-}  // namespace
-
 std::string render_to_bytes(const std::string& page_path, OutputFormat format, const std::string& font_dir,
                             double dpi, DiagnosticSink& warnings) {
-  DisplayPage page = make_page(page_path, font_dir, warnings);
+  DisplayPage page = compose_page(page_path, font_dir, warnings);
   std::ostringstream out;
   PaintOptions po;
   po.dpi = dpi;

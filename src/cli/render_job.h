@@ -6,6 +6,7 @@
 #include <vector>
 
 #include "base/diagnostic.h"
+#include "paint/display_list.h"
 #include "paint/painter.h"
 
 namespace forme {
@@ -24,6 +25,10 @@ struct RenderResult {
 
 /// Renders a page description to a file; never throws for bad input.
 RenderResult render_file(const RenderOptions& options);
+
+/// Runs every stage up to painting: the laid-out page (tests read its text
+/// positions). Throws InputError.
+DisplayPage compose_page(const std::string& page_path, const std::string& font_dir, DiagnosticSink& warnings);
 
 /// Renders to bytes in memory (tests, fuzzing). Throws InputError.
 std::string render_to_bytes(const std::string& page_path, OutputFormat format, const std::string& font_dir,

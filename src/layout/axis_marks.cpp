@@ -10,7 +10,6 @@
 namespace forme {
 
 namespace {
-constexpr double kLeading = 1.2;
 
 bool is_value_axis(const Axis& a) { return a.kind == AxisKind::number; }
 
@@ -45,7 +44,7 @@ int label_stride(const Axis& axis, const std::vector<ShapedText>& labels, double
 
 double x_label_band(const Axis& x, const PageStyle& st, const std::vector<ShapedText>& labels,
                     double category_width) {
-  const double line = st.label_size() * kLeading;
+  const double line = PageStyle::line_height(st.fonts.regular, st.label_size());
   double lines = 1;
   if (x.kind == AxisKind::date)
     for (const auto& t : x.ticks)
@@ -89,7 +88,8 @@ void draw_axis_labels(const PlotFrame& f, const PageStyle& st, const AxisLabelli
   if (which.x_labels) {
     auto labels = shape_tick_labels(f.x, st);
     const int stride = label_stride(f.x, labels, f.plot.w, st.base * 0.8);
-    const double baseline = f.plot.bottom() + tl + pad + st.label_size() * 0.8;
+    const double lead = PageStyle::line_height(st.fonts.regular, st.label_size());
+    const double baseline = f.plot.bottom() + tl + pad + st.fonts.regular->ascent_em() * st.label_size();
     for (std::size_t i = 0; i < f.x.ticks.size(); ++i) {
       const Tick& t = f.x.ticks[i];
       const double x = f.px(t.value);
@@ -100,7 +100,7 @@ void draw_axis_labels(const PlotFrame& f, const PageStyle& st, const AxisLabelli
         double y = baseline;
         for (auto& line : wrap_text(t.label, st.fonts.regular, st.label_size(), f.band_x() * 0.95)) {
           page.add(text_at(line, x, y, Align::centre, st.ink.muted, TextRole::tick_label));
-          y += st.label_size() * kLeading;
+          y += lead;
         }
       } else {
         page.add(text_at(labels[i], x, baseline, Align::centre, st.ink.muted, TextRole::tick_label));
@@ -109,7 +109,7 @@ void draw_axis_labels(const PlotFrame& f, const PageStyle& st, const AxisLabelli
           ShapeOptions o;
           o.tabular_figures = true;
           page.add(text_at(shape_text(year, st.fonts.regular, st.label_size(), o), x,
-                           baseline + st.label_size() * kLeading, Align::centre, st.ink.muted, TextRole::tick_label));
+                           baseline + lead, Align::centre, st.ink.muted, TextRole::tick_label));
         }
       }
     }

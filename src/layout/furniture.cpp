@@ -5,20 +5,15 @@
 
 namespace forme {
 
-namespace {
-// Leading (baseline to baseline) as a multiple of the type size.
-constexpr double kLeading = 1.25;
-}  // namespace
-
 double set_heading(const PageSpec& spec, const PageStyle& st, const Rect& content, DisplayPage& page) {
   double y = content.y;
   bool any = false;
   if (!spec.title.empty()) {
     const double size = st.title_size();
+    const double lead = PageStyle::line_height(st.fonts.bold, size);
     for (auto& line : wrap_text(spec.title, st.fonts.bold, size, content.w)) {
-      y += line.ascent;
-      page.add(text_at(line, content.x, y, Align::left, st.ink.text, TextRole::title));
-      y += size * kLeading - line.ascent;
+      page.add(text_at(line, content.x, y + line.ascent, Align::left, st.ink.text, TextRole::title));
+      y += lead;
     }
     any = true;
   }
@@ -27,10 +22,10 @@ double set_heading(const PageSpec& spec, const PageStyle& st, const Rect& conten
     y += any ? size * 0.2 : 0;
     // A measure of about 80 characters reads comfortably (common practice).
     const double measure = std::min(content.w, size * 0.5 * 80);
+    const double lead = PageStyle::line_height(st.fonts.regular, size);
     for (auto& line : wrap_text(spec.standfirst, st.fonts.regular, size, measure)) {
-      y += line.ascent;
-      page.add(text_at(line, content.x, y, Align::left, st.ink.muted, TextRole::standfirst));
-      y += size * kLeading - line.ascent;
+      page.add(text_at(line, content.x, y + line.ascent, Align::left, st.ink.muted, TextRole::standfirst));
+      y += lead;
     }
     any = true;
   }
@@ -49,7 +44,7 @@ double set_footer(const PageSpec& spec, const PageStyle& st, const Rect& content
   for (const auto& n : extra_notes) add(n, TextRole::note, st.fonts.regular);
   if (!spec.source.empty()) add(spec.source, TextRole::source, st.fonts.regular);
   if (lines.empty()) return 0;
-  const double leading = size * kLeading;
+  const double leading = PageStyle::line_height(st.fonts.regular, size);
   const double height = leading * static_cast<double>(lines.size());
   double y = content.bottom() - height;
   // A hairline separates the footer from the charts above it.

@@ -54,9 +54,12 @@ GridMeasure measure_grid(const std::vector<PanelData>& panels, const std::vector
     any_ytitle |= !a.y.title.empty() && a.y.kind != AxisKind::category;
     any_xtitle |= !a.x.title.empty();
   }
-  const double line = st.label_size() * 1.25;
-  m.top = (any_title ? st.panel_title_size() * 1.4 : 0) + (any_ytitle ? line : 0) + st.base * 0.5;
-  m.x_title = any_xtitle ? line + st.base * 0.2 : 0;
+  const double line = PageStyle::line_height(st.fonts.regular, st.label_size());
+  const double title_line = PageStyle::line_height(st.fonts.bold, st.panel_title_size());
+  // Panel title, y axis title, then room for the top tick label, which is
+  // centred on the plot's top edge.
+  m.top = (any_title ? title_line + st.base * 0.15 : 0) + (any_ytitle ? line : 0) + line * 0.55 + st.base * 0.15;
+  m.x_title = any_xtitle ? line + st.base * 0.3 : 0;
   m.right = std::max(marks_right_inset(panels.front().kind, panels, st), last_x_half) + st.base * 0.2;
   return m;
 }
@@ -129,13 +132,14 @@ DisplayPage layout_page(const PageSpec& spec, const std::vector<PanelData>& pane
     double ty = y - m.top;
     if (!panels[i].title.empty()) {
       auto t = shape_text(panels[i].title, st.fonts.bold, st.panel_title_size());
-      ty += t.ascent;
-      page.add(text_at(std::move(t), cell_left, ty, Align::left, st.ink.text, TextRole::panel_title));
-      ty += st.panel_title_size() * 1.4 - st.panel_title_size() * st.fonts.bold->ascent_em();
+      const double asc = t.ascent;
+      page.add(text_at(std::move(t), cell_left, ty + asc, Align::left, st.ink.text, TextRole::panel_title));
+      ty += PageStyle::line_height(st.fonts.bold, st.panel_title_size()) + st.base * 0.15;
     }
     if (!f.y.title.empty() && f.y.kind != AxisKind::category && shows_y(c)) {
       auto t = shape_text(f.y.title, st.fonts.regular, st.label_size());
-      page.add(text_at(std::move(t), cell_left, ty + st.label_size() * 0.9, Align::left, st.ink.muted, TextRole::axis_title));
+      const double asc = t.ascent;
+      page.add(text_at(std::move(t), cell_left, ty + asc, Align::left, st.ink.muted, TextRole::axis_title));
     }
 
     draw_axis_backdrop(f, st, page);
@@ -143,7 +147,8 @@ DisplayPage layout_page(const PageSpec& spec, const std::vector<PanelData>& pane
     draw_axis_labels(f, st, AxisLabelling{shows_x(static_cast<int>(i)), shows_y(c)}, page);
     if (!f.x.title.empty() && shows_x(static_cast<int>(i))) {
       auto t = shape_text(f.x.title, st.fonts.regular, st.label_size());
-      page.add(text_at(std::move(t), f.plot.cx(), f.plot.bottom() + m.x_band + st.label_size() * 0.9,
+      const double asc = t.ascent;
+      page.add(text_at(std::move(t), f.plot.cx(), f.plot.bottom() + m.x_band + st.base * 0.3 + asc,
                        Align::centre, st.ink.muted, TextRole::axis_title));
     }
   }

@@ -31,6 +31,13 @@ struct PageStyle {
   double rule_width() const { return base * 0.07; }   ///< gridlines and ticks
   double tick_length() const { return base * 0.35; }
   double dot_radius() const { return base * 0.3; }
+
+  /// Height of a line of text as PDF readers measure it: the font's
+  /// ascender plus descender. Lines are stacked at least this far apart so
+  /// their boxes never overlap.
+  static double line_height(const FontRef& font, double size) {
+    return (font->ascent_em() + font->descent_em()) * size;
+  }
 };
 
 /// Base type size for a sheet: 8 pt on A4/Letter, growing with the square

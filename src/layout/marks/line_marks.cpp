@@ -37,7 +37,7 @@ void draw_line_marks(const MarkContext& ctx, DisplayPage& page) {
   for (const auto& e : ends) {
     texts.push_back(shape_text(*e.name, st.fonts.regular, st.label_size()));
     desired.push_back(e.y);
-    heights.push_back(texts.back().cap_height * 1.6);
+    heights.push_back(PageStyle::line_height(st.fonts.regular, st.label_size()));
   }
   SpreadOptions opt;
   opt.gap = st.base * 0.15;

@@ -1,0 +1,61 @@
+#pragma once
+/// Helpers for tests that ask independent tools (poppler, qpdf, fontTools)
+/// about files forme wrote.
+#include <string>
+#include <vector>
+
+namespace forme::test {
+
+struct CommandResult {
+  int exit_code = -1;
+  std::string out;  ///< standard output
+  std::string err;  ///< standard error
+};
+
+/// Runs a shell command, capturing its output.
+CommandResult run(const std::string& command);
+
+/// True when `tool` is on PATH (tests that need it fail loudly if not).
+bool have_tool(const std::string& tool);
+
+/// A fresh temporary folder, removed when the object dies.
+class TempDir {
+ public:
+  TempDir();
+  ~TempDir();
+  TempDir(const TempDir&) = delete;
+  TempDir& operator=(const TempDir&) = delete;
+  const std::string& path() const { return path_; }
+  std::string file(const std::string& name) const { return path_ + "/" + name; }
+
+ private:
+  std::string path_;
+};
+
+void write_file(const std::string& path, const std::string& text);
+std::string read_file(const std::string& path);
+
+/// Runs the forme executable with the given arguments.
+CommandResult run_forme(const std::string& args);
+
+/// A word as `pdftotext -bbox` reports it (page coordinates, y down).
+struct PdfWord {
+  std::string text;
+  double x_min = 0, y_min = 0, x_max = 0, y_max = 0;
+};
+
+struct PdfPageWords {
+  double width = 0, height = 0;
+  std::vector<PdfWord> words;
+};
+
+/// Words of every page of a PDF, via poppler's `pdftotext -bbox`.
+std::vector<PdfPageWords> pdf_words(const std::string& pdf);
+
+/// Lines of every page, via `pdftotext -bbox-layout` (each line's box and text).
+std::vector<PdfPageWords> pdf_lines(const std::string& pdf);
+
+/// Every page description under layouts/.
+std::vector<std::string> layout_pages();
+
+}  // namespace forme::test
