@@ -1,6 +1,6 @@
 # Finds the Debian 12 packages forme builds on and gathers them behind one
 # interface target, forme::deps. Cairo, HarfBuzz and FreeType ship pkg-config
-# files; yaml-cpp, fmt and CLI11 ship CMake packages.
+# files; yaml-cpp and CLI11 ship CMake packages.
 find_package(PkgConfig REQUIRED)
 pkg_check_modules(CAIRO REQUIRED IMPORTED_TARGET cairo cairo-pdf cairo-svg cairo-png cairo-ft)
 pkg_check_modules(HARFBUZZ REQUIRED IMPORTED_TARGET harfbuzz)
@@ -8,11 +8,10 @@ pkg_check_modules(FREETYPE REQUIRED IMPORTED_TARGET freetype2)
 # libunibreak: Unicode line breaking (UAX #14) for wrapped notes and callouts.
 pkg_check_modules(UNIBREAK REQUIRED IMPORTED_TARGET libunibreak)
 find_package(yaml-cpp REQUIRED)
-find_package(fmt REQUIRED)
 find_package(CLI11 REQUIRED)
 
 add_library(forme_deps INTERFACE)
 target_link_libraries(forme_deps INTERFACE
   PkgConfig::CAIRO PkgConfig::HARFBUZZ PkgConfig::FREETYPE PkgConfig::UNIBREAK
-  yaml-cpp fmt::fmt CLI11::CLI11)
+  yaml-cpp CLI11::CLI11)
 add_library(forme::deps ALIAS forme_deps)
