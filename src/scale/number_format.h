@@ -1,5 +1,12 @@
 #pragma once
 /// Number formatting for tick labels and values.
+///
+/// Digits come from the shortest decimal that reads back as the same double
+/// (0.1 prints as "0.1", not 0.1000000000000000055…); scaling for percent
+/// and SI prefixes moves the decimal point in that digit string, and
+/// rounding to fixed decimals rounds that decimal half away from zero
+/// (1.005 → "1.01", 2.5 → "3"), so what prints is what a reader expects
+/// from the number as written.
 #include <string>
 
 namespace forme {
@@ -21,10 +28,22 @@ struct NumberFormat {
 };
 
 /// Formats `v`. Negative numbers use the Unicode minus sign (U+2212), as
-/// typesetters do; -0 prints as 0.
+/// typesetters do; -0 prints as 0, and so does a negative number that
+/// rounds to zero ("0.0", never "−0.0").
+///
+/// Layout: minus, `prefix`, digits, SI prefix or "%", `suffix`
+/// ("−£1,234.5 t"). SI picks the prefix (µ m · k M G T) that puts the
+/// mantissa in [1, 1000) — after rounding, so 999,960 with one decimal is
+/// "1.0M" — and stays at T or µ beyond them (2,500T). Zero has no prefix.
+/// NaN prints as "NaN" and infinities as "∞" / "−∞", with prefix and suffix.
 std::string format_number(double v, const NumberFormat& f);
 
-/// The number of decimals needed so every tick of `step` prints distinctly.
+/// The number of decimals needed so every tick of `step` prints distinctly:
+/// the fewest (from the step's leading digit on) that show the step exactly
+/// within three more digits (0.25 → 2, 2.5 → 1, 100 → 0, and 0.1 + 0.2
+/// → 1); for a step with no short exact decimal, enough for two
+/// significant digits of the step (1/3 → 2, 100/3 → 0). 0 for a step that
+/// is not finite and positive.
 int decimals_for_step(double step);
 
 }  // namespace forme

@@ -1,0 +1,175 @@
+#include "scale/number_format.h"
+
+#include <algorithm>
+#include <charconv>
+#include <cmath>
+#include <string_view>
+
+#include "scale/power_of_ten.h"
+
+namespace forme {
+
+namespace {
+
+constexpr const char* kMinus = "\u2212";
+
+/// A non-negative decimal: digits × 10^exponent. `digits` has no leading or
+/// trailing zeros, and is empty for zero.
+struct Decimal {
+  std::string digits;
+  int exponent = 0;
+
+  bool zero() const { return digits.empty(); }
+  /// ⌊log10 value⌋, for a non-zero value.
+  int order() const { return static_cast<int>(digits.size()) - 1 + exponent; }
+};
+
+void normalize(Decimal& d) {
+  const auto first = d.digits.find_first_not_of('0');
+  if (first == std::string::npos) {
+    d = {};
+    return;
+  }
+  d.digits.erase(0, first);
+  const auto last = d.digits.find_last_not_of('0');
+  d.exponent += static_cast<int>(d.digits.size() - 1 - last);
+  d.digits.erase(last + 1);
+}
+
+/// The shortest decimal that reads back as `magnitude` (finite, ≥ 0).
+Decimal shortest_decimal(double magnitude) {
+  char buf[64];
+  const auto res = std::to_chars(buf, buf + sizeof buf, magnitude, std::chars_format::scientific);
+  const std::string_view s(buf, static_cast<std::size_t>(res.ptr - buf));
+  const auto e = s.find('e');
+  Decimal d;
+  for (char c : s.substr(0, e))
+    if (c != '.') d.digits += c;
+  std::string_view exp = s.substr(e + 1);
+  if (!exp.empty() && exp.front() == '+') exp.remove_prefix(1);
+  int power = 0;
+  std::from_chars(exp.data(), exp.data() + exp.size(), power);
+  d.exponent = power - (static_cast<int>(d.digits.size()) - 1);
+  normalize(d);
+  return d;
+}
+
+/// Rounds to `decimals` digits after the point, half away from zero.
+void round_to(Decimal& d, int decimals) {
+  if (d.zero() || d.exponent >= -decimals) return;
+  const long long drop = static_cast<long long>(-decimals) - d.exponent;
+  const long long keep = static_cast<long long>(d.digits.size()) - drop;
+  if (keep < 0) {
+    d = {};
+    return;
+  }
+  const bool up = d.digits[static_cast<std::size_t>(keep)] >= '5';
+  d.digits.resize(static_cast<std::size_t>(keep));
+  d.exponent = -decimals;
+  if (up) {
+    auto i = d.digits.size();
+    while (i > 0 && d.digits[i - 1] == '9') d.digits[--i] = '0';
+    if (i == 0) d.digits.insert(d.digits.begin(), '1');
+    else ++d.digits[i - 1];
+  }
+  normalize(d);
+}
+
+std::string group_thousands(const std::string& integer, const std::string& separator) {
+  std::string out;
+  const std::size_t n = integer.size();
+  for (std::size_t i = 0; i < n; ++i) {
+    if (i > 0 && (n - i) % 3 == 0) out += separator;
+    out += integer[i];
+  }
+  return out;
+}
+
+std::string render(const Decimal& d, int min_decimals, const NumberFormat& f) {
+  std::string integer, fraction;
+  if (d.zero()) {
+    integer = "0";
+  } else if (d.exponent >= 0) {
+    integer = d.digits + std::string(static_cast<std::size_t>(d.exponent), '0');
+  } else {
+    const long long point = static_cast<long long>(d.digits.size()) + d.exponent;
+    if (point > 0) {
+      integer = d.digits.substr(0, static_cast<std::size_t>(point));
+      fraction = d.digits.substr(static_cast<std::size_t>(point));
+    } else {
+      integer = "0";
+      fraction = std::string(static_cast<std::size_t>(-point), '0') + d.digits;
+    }
+  }
+  if (static_cast<int>(fraction.size()) < min_decimals)
+    fraction.append(static_cast<std::size_t>(min_decimals) - fraction.size(), '0');
+  if (f.thousands) integer = group_thousands(integer, f.group_separator);
+  return fraction.empty() ? integer : integer + f.decimal_separator + fraction;
+}
+
+int floor_div(int a, int b) { return a / b - ((a % b != 0) && ((a < 0) != (b < 0)) ? 1 : 0); }
+
+// SI prefixes from 10^-6 to 10^12, by power of a thousand.
+constexpr int kLowestSiPower = -2;
+constexpr int kHighestSiPower = 4;
+constexpr const char* kSiPrefixes[] = {"µ", "m", "", "k", "M", "G", "T"};
+
+/// Scales `d` by the SI prefix that keeps the rounded mantissa below 1000;
+/// returns the prefix.
+std::string apply_si(Decimal& d, int decimals) {
+  if (d.zero()) return "";
+  int power = std::clamp(floor_div(d.order(), 3), kLowestSiPower, kHighestSiPower);
+  for (;;) {
+    Decimal scaled = d;
+    scaled.exponent -= 3 * power;
+    if (decimals >= 0) round_to(scaled, decimals);
+    // Rounding can carry into the next thousand (999.96k → 1000.0k).
+    if (!scaled.zero() && scaled.order() >= 3 && power < kHighestSiPower) {
+      ++power;
+      continue;
+    }
+    d = scaled;
+    return d.zero() ? "" : kSiPrefixes[power - kLowestSiPower];
+  }
+}
+
+}  // namespace
+
+std::string format_number(double v, const NumberFormat& f) {
+  if (std::isnan(v)) return f.prefix + "NaN" + f.suffix;
+  bool negative = std::signbit(v);
+  if (std::isinf(v)) return (negative ? kMinus : "") + f.prefix + "∞" + f.suffix;
+
+  Decimal d = shortest_decimal(std::abs(v));
+  std::string unit;
+  switch (f.style) {
+    case NumberFormat::Style::plain:
+      break;
+    case NumberFormat::Style::percent:
+      unit = "%";
+      break;
+    case NumberFormat::Style::fraction_percent:
+      if (!d.zero()) d.exponent += 2;
+      unit = "%";
+      break;
+    case NumberFormat::Style::si:
+      unit = apply_si(d, f.decimals);
+      break;
+  }
+  if (f.decimals >= 0) round_to(d, f.decimals);
+  if (d.zero()) negative = false;
+  return (negative ? kMinus : "") + f.prefix + render(d, f.decimals, f) + unit + f.suffix;
+}
+
+int decimals_for_step(double step) {
+  if (!std::isfinite(step) || !(step > 0)) return 0;
+  const int order = shortest_decimal(step).order();
+  const double mantissa = times_power_of_ten(step, -order);  // in [1, 10)
+  double scaled = mantissa;
+  for (int extra = 0; extra <= 3; ++extra, scaled *= 10) {
+    if (std::abs(scaled - std::round(scaled)) <= 1e-9 * scaled) return std::max(0, extra - order);
+  }
+  return std::max(0, 1 - order);
+}
+
+}  // namespace forme

@@ -1,0 +1,154 @@
+// Number formatting for labels. Every expected string below was written out
+// by hand from the number and the rule, not produced by running forme.
+#include <catch2/catch.hpp>
+
+#include <limits>
+
+#include "scale/number_format.h"
+
+using forme::decimals_for_step;
+using forme::format_number;
+using forme::NumberFormat;
+using Style = NumberFormat::Style;
+
+namespace {
+
+NumberFormat style(Style s, int decimals = -1) {
+  NumberFormat f;
+  f.style = s;
+  f.decimals = decimals;
+  return f;
+}
+
+std::string plain(double v, int decimals = -1) { return format_number(v, style(Style::plain, decimals)); }
+std::string si(double v, int decimals = -1) { return format_number(v, style(Style::si, decimals)); }
+
+const std::string kMinus = "\xE2\x88\x92";  // U+2212 MINUS SIGN in UTF-8
+
+}  // namespace
+
+TEST_CASE("plain numbers group thousands and print the shortest exact decimal", "[scale][format]") {
+  CHECK(plain(12345.6) == "12,345.6");
+  CHECK(plain(1234567) == "1,234,567");
+  CHECK(plain(999) == "999");
+  CHECK(plain(1000) == "1,000");
+  CHECK(plain(100000) == "100,000");
+  CHECK(plain(0) == "0");
+  CHECK(plain(0.1) == "0.1");
+  CHECK(plain(0.000123) == "0.000123");
+  CHECK(plain(2.5) == "2.5");
+  // The double nearest 0.1 + 0.2 is not the double nearest 0.3; shortest
+  // exact keeps every digit that tells them apart.
+  CHECK(plain(0.1 + 0.2) == "0.30000000000000004");
+  CHECK(plain(1e21) == "1,000,000,000,000,000,000,000");
+}
+
+TEST_CASE("fixed decimals always print, rounding half away from zero", "[scale][format]") {
+  CHECK(plain(3, 2) == "3.00");
+  CHECK(plain(12345.678, 1) == "12,345.7");
+  CHECK(plain(2.5, 0) == "3");
+  CHECK(plain(0.125, 2) == "0.13");
+  // 1.005 is stored as 1.00499999999999989…; rounding the number as written
+  // gives 1.01.
+  CHECK(plain(1.005, 2) == "1.01");
+  CHECK(plain(999.96, 1) == "1,000.0");
+  CHECK(plain(9.999, 2) == "10.00");
+  CHECK(plain(0.0004, 3) == "0.000");
+  CHECK(plain(0.0005, 3) == "0.001");
+  CHECK(plain(1234.5, 0) == "1,235");
+}
+
+TEST_CASE("negatives use U+2212, and nothing prints as minus zero", "[scale][format]") {
+  CHECK(plain(-5) == kMinus + "5");
+  CHECK(plain(-12345.6) == kMinus + "12,345.6");
+  CHECK(plain(-0.0) == "0");
+  CHECK(plain(-0.0, 2) == "0.00");
+  CHECK(plain(-0.04, 1) == "0.0");
+  CHECK(plain(-0.05, 1) == kMinus + "0.1");
+  CHECK(plain(-2.5, 0) == kMinus + "3");
+  CHECK(si(-1500) == kMinus + "1.5k");
+  CHECK(format_number(-0.001, style(Style::fraction_percent, 0)) == "0%");
+}
+
+TEST_CASE("separators, grouping switch, prefix and suffix", "[scale][format]") {
+  NumberFormat f;
+  f.thousands = false;
+  CHECK(format_number(12345.6, f) == "12345.6");
+  f.thousands = true;
+  f.group_separator = "\u2009";  // thin space
+  f.decimal_separator = ",";
+  CHECK(format_number(12345.6, f) == "12\u2009345,6");
+  NumberFormat money;
+  money.prefix = "£";
+  money.suffix = " t";
+  money.decimals = 1;
+  CHECK(format_number(-1234.5, money) == kMinus + "£1,234.5 t");
+  CHECK(format_number(0, money) == "£0.0 t");
+}
+
+TEST_CASE("percent styles", "[scale][format]") {
+  CHECK(format_number(12.5, style(Style::percent)) == "12.5%");
+  CHECK(format_number(100, style(Style::percent)) == "100%");
+  CHECK(format_number(0.125, style(Style::fraction_percent)) == "12.5%");
+  // 0.07 × 100 is 7.000000000000001 in binary; the decimal point moves instead.
+  CHECK(format_number(0.07, style(Style::fraction_percent)) == "7%");
+  CHECK(format_number(0.0005, style(Style::fraction_percent)) == "0.05%");
+  CHECK(format_number(12.3456, style(Style::fraction_percent)) == "1,234.56%");
+  CHECK(format_number(0.12345, style(Style::fraction_percent, 1)) == "12.3%");
+  CHECK(format_number(0.5, style(Style::fraction_percent, 1)) == "50.0%");
+  CHECK(format_number(-0.25, style(Style::fraction_percent)) == kMinus + "25%");
+}
+
+TEST_CASE("SI prefixes keep the mantissa below 1000", "[scale][format]") {
+  CHECK(si(0) == "0");
+  CHECK(si(1) == "1");
+  CHECK(si(999) == "999");
+  CHECK(si(1000) == "1k");
+  CHECK(si(12300) == "12.3k");
+  CHECK(si(4.5e6) == "4.5M");
+  CHECK(si(1.2e9) == "1.2G");
+  CHECK(si(7e12) == "7T");
+  CHECK(si(2.5e15) == "2,500T");  // no prefix beyond tera
+  CHECK(si(0.5) == "500m");
+  CHECK(si(0.0123) == "12.3m");
+  CHECK(si(4.5e-6) == "4.5µ");
+  CHECK(si(4.5e-9) == "0.0045µ");  // no prefix below micro
+  // Rounding that reaches 1000 moves up a prefix.
+  CHECK(si(999960, 1) == "1.0M");
+  CHECK(si(999940, 1) == "999.9k");
+  CHECK(si(999.7, 0) == "1k");
+  CHECK(si(1500, 2) == "1.50k");
+  // Rounding to zero leaves no prefix.
+  CHECK(si(1e-9, 0) == "0");
+}
+
+TEST_CASE("non-finite values", "[scale][format]") {
+  const double inf = std::numeric_limits<double>::infinity();
+  CHECK(plain(std::numeric_limits<double>::quiet_NaN()) == "NaN");
+  CHECK(plain(inf) == "∞");
+  CHECK(plain(-inf) == kMinus + "∞");
+  CHECK(format_number(inf, style(Style::percent)) == "∞");
+}
+
+TEST_CASE("decimals_for_step shows each tick of the step exactly", "[scale][format]") {
+  CHECK(decimals_for_step(1) == 0);
+  CHECK(decimals_for_step(100) == 0);
+  CHECK(decimals_for_step(2.5) == 1);
+  CHECK(decimals_for_step(0.1) == 1);
+  CHECK(decimals_for_step(0.2) == 1);
+  CHECK(decimals_for_step(0.25) == 2);
+  CHECK(decimals_for_step(0.125) == 3);
+  CHECK(decimals_for_step(0.002) == 3);
+  CHECK(decimals_for_step(1e-5) == 5);
+  CHECK(decimals_for_step(5e-7) == 7);
+  CHECK(decimals_for_step(2.5e6) == 0);
+  // A step computed in binary arithmetic still counts as its decimal.
+  CHECK(decimals_for_step(0.1 + 0.2) == 1);
+  // No short exact decimal: two significant digits.
+  CHECK(decimals_for_step(1.0 / 3) == 2);
+  CHECK(decimals_for_step(100.0 / 3) == 0);
+  CHECK(decimals_for_step(0) == 0);
+  CHECK(decimals_for_step(-1) == 0);
+  CHECK(decimals_for_step(std::numeric_limits<double>::quiet_NaN()) == 0);
+  CHECK(decimals_for_step(std::numeric_limits<double>::infinity()) == 0);
+}
