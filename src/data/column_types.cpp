@@ -155,9 +155,7 @@ InferredType infer_column_type(const Column& column) {
 
 void assign_column_type(Column& column, std::optional<ColumnType> declared,
                         const std::vector<CellLoc>& locs, const std::string& path) {
-  InferredType inferred;
-  if (!declared) inferred = infer_column_type(column);
-  column.type = declared ? *declared : inferred.type;
+  column.type = declared ? *declared : infer_column_type(column).type;
   column.date_precision = DatePrecision::day;
   column.values.clear();
   if (column.type == ColumnType::text) return;
@@ -191,9 +189,8 @@ void assign_column_type(Column& column, std::optional<ColumnType> declared,
     return;
   }
 
-  // Dates: every cell at one precision; a declared column takes the first cell's.
+  // Dates: every cell at the precision of the column's first date.
   std::optional<DatePrecision> precision;
-  if (!declared) precision = inferred.precision;
   std::size_t first_row = 0;
   for (std::size_t r = 0; r < column.text.size(); ++r) {
     const std::string_view t = trim_blanks(column.text[r]);
@@ -213,9 +210,8 @@ void assign_column_type(Column& column, std::optional<ColumnType> declared,
       fail(r,
            "date '" + quote_cell(t) + "'" + in_column + " is by " + precision_words(d->precision) +
                " but the column is by " + precision_words(*precision),
-           declared ? "the first date, '" + quote_cell(trim_blanks(column.text[first_row])) +
-                          "', sets the column's precision; write every date the same way"
-                    : "write every date in the column the same way");
+           "the first date, '" + quote_cell(trim_blanks(column.text[first_row])) +
+               "', sets the column's precision; write every date the same way");
     column.values.push_back(d->day);
   }
   if (precision) column.date_precision = *precision;
