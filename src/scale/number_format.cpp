@@ -107,8 +107,6 @@ std::string render(const Decimal& d, int min_decimals, const NumberFormat& f) {
   return fraction.empty() ? integer : integer + f.decimal_separator + fraction;
 }
 
-int floor_div(int a, int b) { return a / b - ((a % b != 0) && ((a < 0) != (b < 0)) ? 1 : 0); }
-
 // SI prefixes from 10^-6 to 10^12, by power of a thousand.
 constexpr int kLowestSiPower = -2;
 constexpr int kHighestSiPower = 4;
@@ -118,7 +116,7 @@ constexpr const char* kSiPrefixes[] = {"µ", "m", "", "k", "M", "G", "T"};
 /// returns the prefix.
 std::string apply_si(Decimal& d, int decimals) {
   if (d.zero()) return "";
-  int power = std::clamp(floor_div(d.order(), 3), kLowestSiPower, kHighestSiPower);
+  int power = std::clamp(static_cast<int>(std::floor(d.order() / 3.0)), kLowestSiPower, kHighestSiPower);
   for (;;) {
     Decimal scaled = d;
     scaled.exponent -= 3 * power;
