@@ -35,6 +35,10 @@ struct PanelAxes {
 /// One PanelAxes per panel, all sharing domains and ticks.
 std::vector<PanelAxes> resolve_axes(const std::vector<PanelData>& panels);
 
+/// Smallest distance between neighbouring x values in any series (1 when
+/// no series has two distinct values): the width of one period on a time axis.
+double smallest_step(const std::vector<const PanelData*>& panels);
+
 /// "Title (unit)", "Title", "unit", or "".
 std::string axis_title(const std::string& title, const std::string& unit);
 

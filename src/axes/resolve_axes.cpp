@@ -43,24 +43,33 @@ Axis number_axis(Extent e, bool from_zero, const std::optional<NumberFormat>& fm
   }
   Ticks t = extended_ticks(e.lo, e.hi, kWantedTicks, false);
   a.format = fmt.value_or(NumberFormat{});
-  if (!fmt || fmt->decimals < 0) a.format.decimals = std::max(0, t.decimals);
+  if (!fmt || fmt->decimals < 0) {
+    // Enough decimals to tell every tick apart, counted in the printed unit:
+    // a fraction printed as a percent needs two fewer; SI prefixes choose
+    // their own (shortest exact) digits.
+    switch (a.format.style) {
+      case NumberFormat::Style::fraction_percent: a.format.decimals = std::max(0, t.decimals - 2); break;
+      case NumberFormat::Style::si: a.format.decimals = -1; break;
+      default: a.format.decimals = std::max(0, t.decimals); break;
+    }
+  }
   a.lo = std::min(e.lo, t.values.empty() ? e.lo : t.values.front());
   a.hi = std::max(e.hi, t.values.empty() ? e.hi : t.values.back());
   for (double v : t.values) a.ticks.push_back({v, format_number(v, a.format), false});
   return a;
 }
 
-Axis date_axis(Extent e, DatePrecision precision) {
+Axis date_axis(Extent e, DatePrecision precision, double pad) {
   Axis a;
   a.kind = AxisKind::date;
   a.dates = precision;
   if (e.empty()) e = {0, 365};
   if (e.hi <= e.lo) e = {e.lo - 15, e.hi + 15};
-  a.lo = e.lo;
-  a.hi = e.hi;
+  a.lo = e.lo - pad;
+  a.hi = e.hi + pad;
   DateTicks dt = date_ticks(e.lo, e.hi, kWantedTicks + 1);
   for (const auto& t : dt.ticks)
-    if (t.day >= e.lo - 1e-9 && t.day <= e.hi + 1e-9) a.ticks.push_back({t.day, t.label, t.major});
+    if (t.day >= a.lo - 1e-9 && t.day <= a.hi + 1e-9) a.ticks.push_back({t.day, t.label, t.major});
   return a;
 }
 
@@ -76,6 +85,22 @@ Axis category_axis(const std::vector<std::string>& cats) {
 
 bool bars(ChartKind k) { return k == ChartKind::vertical_bar || k == ChartKind::horizontal_bar; }
 
+}  // namespace
+
+double smallest_step(const std::vector<const PanelData*>& panels) {
+  double step = std::numeric_limits<double>::infinity();
+  for (const PanelData* p : panels)
+    for (const auto& s : p->series) {
+      std::vector<double> xs = s.x;
+      std::sort(xs.begin(), xs.end());
+      for (std::size_t i = 1; i < xs.size(); ++i)
+        if (xs[i] > xs[i - 1]) step = std::min(step, xs[i] - xs[i - 1]);
+    }
+  return std::isfinite(step) ? step : 1.0;
+}
+
+namespace {
+
 // Axes for panels that show the same measure in the same way.
 PanelAxes shared_axes(const std::vector<const PanelData*>& panels) {
   Extent ex, ey;
@@ -89,9 +114,12 @@ PanelAxes shared_axes(const std::vector<const PanelData*>& panels) {
   }
   const PanelData& first = *panels.front();
   const PanelSpec& spec = *first.spec;
+  // Bars on a date axis are one period wide: leave half a period of room
+  // beyond the first and last so the outer bars are not cut in half.
+  const double date_pad = bars(first.kind) ? smallest_step(panels) / 2 : 0;
   auto make = [&](AxisKind kind, const Extent& e, bool zero, const AxisSpec& as, DatePrecision dp) {
     Axis a = kind == AxisKind::category ? category_axis(first.categories)
-             : kind == AxisKind::date   ? date_axis(e, dp)
+             : kind == AxisKind::date   ? date_axis(e, dp, date_pad)
                                         : number_axis(e, zero, as.format);
     a.title = axis_title(as.title, as.unit);
     return a;

@@ -17,8 +17,11 @@ namespace {
 // is shared, so inner panels repeat nothing the reader needs.
 bool outer_labels_only(const GridShape& g) { return g.columns * g.rows > 4; }
 
+// The same series keeps its colour in every panel. A panel's lone unnamed
+// series takes the first colour.
 SeriesColours colour_series(const std::vector<PanelData>& panels, const PageStyle& st) {
   SeriesColours out;
+  out[""] = st.series.front();
   std::size_t next = 0;
   for (const auto& p : panels)
     for (const auto& s : p.series)
@@ -30,7 +33,7 @@ SeriesColours colour_series(const std::vector<PanelData>& panels, const PageStyl
 // the same inner box.
 struct GridMeasure {
   double y_label_width = 0;  ///< widest y tick label (or category name)
-  double x_band = 0;         ///< height of the x tick label band
+  std::vector<double> x_band;  ///< per panel: height of the x tick label band
   double x_title = 0;        ///< height of the x axis title line
   double top = 0;            ///< panel title + y title lines
   double right = 0;          ///< line-end labels or overhang of the last x label
@@ -48,7 +51,7 @@ GridMeasure measure_grid(const std::vector<PanelData>& panels, const std::vector
     m.y_label_width = std::max(m.y_label_width, std::min(widest(ylabels), est_plot_width * 0.4));
     auto xlabels = shape_tick_labels(a.x, st);
     double cat_w = a.x.kind == AxisKind::category ? est_plot_width / std::max<std::size_t>(1, a.x.categories.size()) * 0.95 : 0;
-    m.x_band = std::max(m.x_band, x_label_band(a.x, st, xlabels, cat_w));
+    m.x_band.push_back(x_label_band(a.x, st, xlabels, cat_w));
     if (!xlabels.empty() && a.x.kind != AxisKind::category) last_x_half = std::max(last_x_half, xlabels.back().width / 2);
     any_title |= !panels[i].title.empty();
     any_ytitle |= !a.y.title.empty() && a.y.kind != AxisKind::category;
@@ -95,13 +98,18 @@ DisplayPage layout_page(const PageSpec& spec, const std::vector<PanelData>& pane
   std::vector<double> left(static_cast<std::size_t>(g.columns)), bottom(static_cast<std::size_t>(g.rows));
   double sum_left = 0, sum_bottom = 0;
   for (int c = 0; c < g.columns; ++c) sum_left += left[static_cast<std::size_t>(c)] = shows_y(c) ? m.y_label_width + pad : 0;
+  // Each row is as deep as its deepest x label band needs.
+  std::vector<double> row_band(static_cast<std::size_t>(g.rows), 0);
   for (int r = 0; r < g.rows; ++r) {
     bool any = false;
     for (int c = 0; c < g.columns; ++c) {
       int i = r * g.columns + c;
-      if (i < static_cast<int>(panels.size()) && shows_x(i)) any = true;
+      if (i < static_cast<int>(panels.size()) && shows_x(i)) {
+        any = true;
+        row_band[static_cast<std::size_t>(r)] = std::max(row_band[static_cast<std::size_t>(r)], m.x_band[static_cast<std::size_t>(i)]);
+      }
     }
-    sum_bottom += bottom[static_cast<std::size_t>(r)] = any ? m.x_band + m.x_title : st.base * 0.4;
+    sum_bottom += bottom[static_cast<std::size_t>(r)] = any ? row_band[static_cast<std::size_t>(r)] + m.x_title : st.base * 0.4;
   }
   const double plot_w = (area.w - sum_left - g.columns * m.right - gap * (g.columns - 1)) / g.columns;
   const double plot_h = (area.h - sum_bottom - g.rows * m.top - gap * (g.rows - 1)) / g.rows;
@@ -148,7 +156,7 @@ DisplayPage layout_page(const PageSpec& spec, const std::vector<PanelData>& pane
     if (!f.x.title.empty() && shows_x(static_cast<int>(i))) {
       auto t = shape_text(f.x.title, st.fonts.regular, st.label_size());
       const double asc = t.ascent;
-      page.add(text_at(std::move(t), f.plot.cx(), f.plot.bottom() + m.x_band + st.base * 0.3 + asc,
+      page.add(text_at(std::move(t), f.plot.cx(), f.plot.bottom() + row_band[static_cast<std::size_t>(r)] + st.base * 0.3 + asc,
                        Align::centre, st.ink.muted, TextRole::axis_title));
     }
   }

@@ -46,8 +46,10 @@ AxisKind kind_of(const Column& c) {
 
 // The panel's category axis: x for vertical bars, y for horizontal bars
 // and dot strips. Line charts have none.
+// Bars over dates stand on a time axis, one bar per period.
 bool x_is_category(const PanelSpec& p, const Column& x) {
-  return p.kind == ChartKind::vertical_bar || (p.kind != ChartKind::horizontal_bar && x.type == ColumnType::text);
+  if (p.kind == ChartKind::vertical_bar) return x.type != ColumnType::date;
+  return p.kind != ChartKind::horizontal_bar && x.type == ColumnType::text;
 }
 bool y_is_category(const PanelSpec& p, const Column& y) {
   return p.kind == ChartKind::horizontal_bar || (p.kind == ChartKind::dot && y.type == ColumnType::text);
