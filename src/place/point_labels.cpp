@@ -82,20 +82,25 @@ int max_marks_below(double x) {
   return static_cast<int>(std::min(std::ceil(x) - 1, static_cast<double>(kNoLimit)));
 }
 
-/// A grid over the area for `ids` items, with cells `scale` times the
-/// average label in size.
-GridIndex make_grid(const PlacementProblem& p, std::size_t ids, double scale = 1) {
+/// A grid over `region` for `items` boxes of mean size w × h, with cells
+/// `scale` times that size, and at most 16 cells per item (or 1024).
+GridIndex grid_for(const Rect& region, double w, double h, std::size_t items, double scale = 1) {
+  GridIndex grid(region, scale * w, scale * h, std::max<std::size_t>(1024, 16 * items));
+  grid.reserve(items);
+  return grid;
+}
+
+/// A grid over the problem's area for `items` boxes, with cells `scale`
+/// times the mean label in size.
+GridIndex make_grid(const PlacementProblem& p, std::size_t items, double scale = 1) {
+  if (p.labels.empty()) return grid_for(p.area, p.area.w, p.area.h, items, scale);
   double w = 0, h = 0;
   for (const PointLabel& l : p.labels) {
     w += l.w;
     h += l.h;
   }
-  const double n = static_cast<double>(std::max<std::size_t>(p.labels.size(), 1));
-  if (p.labels.empty()) w = h = std::max(p.area.w, p.area.h);
-  const std::size_t cap = std::max<std::size_t>(1024, 16 * p.labels.size());
-  GridIndex grid(p.area, scale * w / n, scale * h / n, cap);
-  grid.reserve(ids);
-  return grid;
+  const auto n = static_cast<double>(p.labels.size());
+  return grid_for(p.area, w / n, h / n, items, scale);
 }
 
 /// The parts of a problem that do not change while searching: candidates
@@ -180,20 +185,26 @@ struct State {
   }
 };
 
+/// Label i's cheapest candidate that costs less than `below` and overlaps
+/// no placed box (other than i's own); kOmitted if there is none.
+int cheapest_free(const Scene& s, const State& st, int i, double below) {
+  int best = kOmitted;
+  for (std::size_t c = s.first[Scene::idx(i)]; c < s.first[Scene::idx(i) + 1]; ++c) {
+    const Candidate& cand = s.candidates[c];
+    if (cand.cost < below && !st.placed.any_overlap(cand.box, i)) {
+      best = static_cast<int>(c);
+      below = cand.cost;
+    }
+  }
+  return best;
+}
+
 /// Gives each label still left out, in `s.by_priority` order, its cheapest
 /// free candidate, when that beats leaving it out.
 void fill_greedily(const Scene& s, State& st) {
   for (int i : s.by_priority) {
     if (st.choice[Scene::idx(i)] != kOmitted) continue;
-    int best = kOmitted;
-    double best_cost = s.omit[Scene::idx(i)];
-    for (std::size_t c = s.first[Scene::idx(i)]; c < s.first[Scene::idx(i) + 1]; ++c) {
-      const Candidate& cand = s.candidates[c];
-      if (cand.cost < best_cost && !st.placed.any_overlap(cand.box, i)) {
-        best = static_cast<int>(c);
-        best_cost = cand.cost;
-      }
-    }
+    const int best = cheapest_free(s, st, i, s.omit[Scene::idx(i)]);
     if (best != kOmitted) st.set(s, i, best);
   }
 }
@@ -205,14 +216,8 @@ void polish(const Scene& s, State& st) {
   for (int i : s.by_priority) {
     const int current = st.choice[Scene::idx(i)];
     if (current < 0) continue;
-    int best = current;
-    for (std::size_t c = s.first[Scene::idx(i)]; c < s.first[Scene::idx(i) + 1]; ++c) {
-      const Candidate& cand = s.candidates[c];
-      if (cand.cost < s.candidates[static_cast<std::size_t>(best)].cost &&
-          !st.placed.any_overlap(cand.box, i))
-        best = static_cast<int>(c);
-    }
-    if (best != current) st.set(s, i, best);
+    const int best = cheapest_free(s, st, i, s.candidates[static_cast<std::size_t>(current)].cost);
+    if (best != kOmitted) st.set(s, i, best);
   }
 }
 
@@ -379,8 +384,7 @@ std::vector<int> drop_overlapping(std::span<const Rect> boxes, std::span<const d
     h += b.h;
   }
   const auto n = static_cast<double>(boxes.size());
-  GridIndex grid(region, w / n, h / n, std::max<std::size_t>(1024, 16 * boxes.size()));
-  grid.reserve(boxes.size());
+  GridIndex grid = grid_for(region, w / n, h / n, boxes.size());
   for (std::size_t i = 0; i < boxes.size(); ++i) grid.insert(static_cast<int>(i), boxes[i]);
 
   std::vector<int> overlaps(boxes.size(), 0);
