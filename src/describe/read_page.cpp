@@ -14,7 +14,7 @@ namespace {
 
 class Builder {
  public:
-  explicit Builder(const YamlDocument& doc) : doc_(doc) {}
+  Builder(const YamlDocument& doc, const Limits& limits) : doc_(doc), limits_(limits) {}
 
   PageSpec build() {
     const YAML::Node& r = doc_.root;
@@ -35,6 +35,9 @@ class Builder {
     defaults.loc = doc_.loc(r);
     if (auto pn = r["panel"]) defaults = panel(pn, defaults);
     if (auto list = r["panels"]) {
+      if (list.size() > limits_.panels)
+        throw InputError(doc_.loc(list), "more than " + std::to_string(limits_.panels) + " panels",
+                         "split the panels over several pages");
       for (const auto& item : list) p.panels.push_back(panel(item, defaults));
     } else if (r["panel"]) {
       p.panels.push_back(defaults);
@@ -230,17 +233,18 @@ class Builder {
   }
 
   const YamlDocument& doc_;
+  const Limits& limits_;
 };
 
 }  // namespace
 
-PageSpec build_page_spec(const YamlDocument& doc) { return Builder(doc).build(); }
+PageSpec build_page_spec(const YamlDocument& doc, const Limits& limits) { return Builder(doc, limits).build(); }
 
-std::optional<PageSpec> read_page(const std::string& path, std::vector<Diagnostic>& errors) {
-  YamlDocument doc = load_yaml_file(path);
+std::optional<PageSpec> read_page(const std::string& path, std::vector<Diagnostic>& errors, const Limits& limits) {
+  YamlDocument doc = load_yaml_file(path, limits);
   errors = validate_document(doc, page_schema());
   if (!errors.empty()) return std::nullopt;
-  return build_page_spec(doc);
+  return build_page_spec(doc, limits);
 }
 
 }  // namespace forme

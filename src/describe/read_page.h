@@ -12,10 +12,11 @@ namespace forme {
 /// Builds the page from a document that passed `validate_document`. Throws
 /// InputError for values that are well-formed but unusable (an unknown sheet
 /// size, margins that leave no room).
-PageSpec build_page_spec(const YamlDocument& doc);
+PageSpec build_page_spec(const YamlDocument& doc, const Limits& limits = {});
 
 /// Loads, validates and builds. Validation problems are all returned in
 /// `errors` (and the result is empty); other problems throw InputError.
-std::optional<PageSpec> read_page(const std::string& path, std::vector<Diagnostic>& errors);
+std::optional<PageSpec> read_page(const std::string& path, std::vector<Diagnostic>& errors,
+                                  const Limits& limits = {});
 
 }  // namespace forme

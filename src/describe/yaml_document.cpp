@@ -1,7 +1,9 @@
 #include "describe/yaml_document.h"
 
+#include <filesystem>
 #include <fstream>
-#include <sstream>
+
+#include "describe/yaml_guard.h"
 
 namespace forme {
 
@@ -23,7 +25,7 @@ std::string explain(const std::string& msg) {
 }
 }  // namespace
 
-YamlDocument parse_yaml(std::string text, const std::string& file) {
+YamlDocument parse_yaml(std::string text, const std::string& file, const Limits& limits) {
   YamlDocument doc;
   doc.file = file;
   doc.text = std::move(text);
@@ -44,6 +46,7 @@ YamlDocument parse_yaml(std::string text, const std::string& file) {
     ++col;
   }
   try {
+    guard_yaml(doc.text, file, limits);
     doc.root = YAML::Load(doc.text);
   } catch (const YAML::ParserException& e) {
     throw InputError(SourceLoc{file, e.mark.line + 1, e.mark.column + 1}, explain(e.msg));
@@ -53,12 +56,18 @@ YamlDocument parse_yaml(std::string text, const std::string& file) {
   return doc;
 }
 
-YamlDocument load_yaml_file(const std::string& path) {
+YamlDocument load_yaml_file(const std::string& path, const Limits& limits) {
+  std::error_code ec;
+  if (std::filesystem::is_directory(path, ec))
+    throw InputError(SourceLoc{path}, "the page description is a folder", "name a .yaml file");
   std::ifstream in(path, std::ios::binary);
   if (!in) throw InputError(SourceLoc{path}, "cannot read page description (missing or unreadable)");
-  std::ostringstream ss;
-  ss << in.rdbuf();
-  return parse_yaml(ss.str(), path);
+  // Read one byte past the limit at most, so a huge file is refused without
+  // being loaded whole.
+  std::string text(limits.description_bytes + 1, '\0');
+  in.read(text.data(), static_cast<std::streamsize>(text.size()));
+  text.resize(static_cast<std::size_t>(in.gcount()));
+  return parse_yaml(std::move(text), path, limits);
 }
 
 }  // namespace forme

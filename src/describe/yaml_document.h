@@ -6,6 +6,7 @@
 #include <yaml-cpp/yaml.h>
 
 #include "base/diagnostic.h"
+#include "base/limits.h"
 
 namespace forme {
 
@@ -18,10 +19,11 @@ struct YamlDocument {
   SourceLoc loc(const YAML::Node& n) const;
 };
 
-/// Parses `text`; throws InputError at the offending line:col.
-YamlDocument parse_yaml(std::string text, const std::string& file);
+/// Parses `text`; throws InputError at the offending line:col. Text that
+/// breaks `limits` (size, aliases, nesting) is refused before a tree is built.
+YamlDocument parse_yaml(std::string text, const std::string& file, const Limits& limits = {});
 
 /// Reads and parses a file; throws InputError if it cannot be read.
-YamlDocument load_yaml_file(const std::string& path);
+YamlDocument load_yaml_file(const std::string& path, const Limits& limits = {});
 
 }  // namespace forme
