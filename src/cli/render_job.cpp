@@ -1,9 +1,16 @@
 #include "cli/render_job.h"
 
+#include <time.h>
+
+#include <cerrno>
+
+#include <cstdlib>
 #include <filesystem>
+#include <optional>
 #include <sstream>
 
 #include "axes/axis.h"
+#include "cli/signal_cleanup.h"
 #include "colour/palette.h"
 #include "data/csv_reader.h"
 #include "describe/read_page.h"
@@ -47,11 +54,31 @@ std::vector<Table> load_tables(const PageSpec& spec) {
   return tables;
 }
 
+// Clears the signal handler's temporary path however the render ends.
+struct CleanupPathScope {
+  CleanupPathScope() = default;
+  CleanupPathScope(const CleanupPathScope&) = delete;
+  CleanupPathScope& operator=(const CleanupPathScope&) = delete;
+  ~CleanupPathScope() { set_cleanup_path(nullptr); }
+};
+
+// Test-only pause between writing and committing (see render_job.h).
+void pause_for_tests() {
+  const char* ms = std::getenv("FORME_TEST_PAUSE_BEFORE_COMMIT_MS");
+  if (!ms) return;
+  long v = std::strtol(ms, nullptr, 10);
+  if (v <= 0 || v > 600'000) return;
+  struct timespec t {v / 1000, (v % 1000) * 1'000'000};
+  while (::nanosleep(&t, &t) != 0 && errno == EINTR) {
+  }
+}
+
 }  // namespace
 
-DisplayPage compose_page(const std::string& page_path, const std::string& font_dir, DiagnosticSink& sink) {
+DisplayPage compose_page(const std::string& page_path, const std::string& font_dir, DiagnosticSink& sink,
+                         const Limits& limits) {
   std::vector<Diagnostic> errors;
-  std::optional<PageSpec> spec = read_page(page_path, errors);      // 1. read description
+  std::optional<PageSpec> spec = read_page(page_path, errors, limits);  // 1. read description
   if (!spec) {
     for (auto& e : errors) sink.report(e);
     throw InputError(errors.front());
@@ -64,8 +91,8 @@ DisplayPage compose_page(const std::string& page_path, const std::string& font_d
 }
 
 std::string render_to_bytes(const std::string& page_path, OutputFormat format, const std::string& font_dir,
-                            double dpi, DiagnosticSink& warnings) {
-  DisplayPage page = compose_page(page_path, font_dir, warnings);
+                            double dpi, DiagnosticSink& warnings, const Limits& limits) {
+  DisplayPage page = compose_page(page_path, font_dir, warnings, limits);
   std::ostringstream out;
   PaintOptions po;
   po.dpi = dpi;
@@ -86,10 +113,17 @@ RenderResult render_file(const RenderOptions& o) {
     std::error_code ec;
     if (std::filesystem::equivalent(o.output_path, o.page_path, ec))
       throw InputError(SourceLoc{o.output_path}, "output would overwrite the page description");
-    std::string bytes = render_to_bytes(o.page_path, *format, o.font_dir, o.dpi, sink);
-    AtomicFile file(o.output_path);
-    file.write(bytes);
-    file.commit();
+    std::string bytes = render_to_bytes(o.page_path, *format, o.font_dir, o.dpi, sink, o.limits);
+    CleanupPathScope forget_temp;
+    std::optional<AtomicFile> file;
+    {
+      SignalBlock no_signals_until_registered;
+      file.emplace(o.output_path);
+      set_cleanup_path(file->temp_path().c_str());
+    }
+    file->write(bytes);
+    pause_for_tests();
+    file->commit();
     r.ok = true;
   } catch (const InputError& e) {
     if (sink.items().empty() || !sink.has_errors()) sink.report(e.diagnostic());

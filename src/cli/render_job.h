@@ -6,6 +6,7 @@
 #include <vector>
 
 #include "base/diagnostic.h"
+#include "base/limits.h"
 #include "paint/display_list.h"
 #include "paint/painter.h"
 
@@ -16,6 +17,7 @@ struct RenderOptions {
   std::string output_path;
   double dpi = 150;
   std::string font_dir;  ///< bundled fonts folder
+  Limits limits;         ///< what one run accepts (base/limits.h)
 };
 
 struct RenderResult {
@@ -24,14 +26,22 @@ struct RenderResult {
 };
 
 /// Renders a page description to a file; never throws for bad input.
+/// While the temporary output file exists its path is registered with
+/// cli/signal_cleanup.h, so an interrupted run leaves nothing behind.
+///
+/// Test-only: when the environment variable FORME_TEST_PAUSE_BEFORE_COMMIT_MS
+/// holds a number of milliseconds, the run sleeps that long after writing
+/// the temporary file and before renaming it into place, so tests can
+/// interrupt it at that moment. It is not part of the user interface.
 RenderResult render_file(const RenderOptions& options);
 
 /// Runs every stage up to painting: the laid-out page (tests read its text
 /// positions). Throws InputError.
-DisplayPage compose_page(const std::string& page_path, const std::string& font_dir, DiagnosticSink& warnings);
+DisplayPage compose_page(const std::string& page_path, const std::string& font_dir, DiagnosticSink& warnings,
+                         const Limits& limits = {});
 
 /// Renders to bytes in memory (tests, fuzzing). Throws InputError.
 std::string render_to_bytes(const std::string& page_path, OutputFormat format, const std::string& font_dir,
-                            double dpi, DiagnosticSink& warnings);
+                            double dpi, DiagnosticSink& warnings, const Limits& limits = {});
 
 }  // namespace forme

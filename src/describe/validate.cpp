@@ -96,7 +96,8 @@ class Validator {
     for (auto it = n.begin(); it != n.end(); ++it) {
       const YAML::Node& k = it->first;
       if (!k.IsScalar()) {
-        error(k, "keys of '" + path + "' must be plain words");
+        error(k, "keys of " + (path.empty() ? std::string("the page description") : "'" + path + "'") +
+                     " must be plain words");
         continue;
       }
       const std::string key = k.Scalar();
