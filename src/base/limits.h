@@ -32,12 +32,14 @@ struct Limits {
   /// Most panels listed under `panels`.
   std::size_t panels = 400;
 
-  // --- data and later stages (recorded here; enforced by their stages as
-  //     they adopt a Limits parameter: see tests/bad/KNOWN-GAPS.md) -------
-  /// Pages per output file (forme renders one page per description today).
-  std::size_t pages = 1;
+  // --- data (enforced by data/csv_reader through CsvOptions::max_bytes) ---
   /// Largest CSV table file accepted, in bytes.
   std::size_t table_bytes = 256u * 1024 * 1024;
+
+  // --- later stages (recorded here; not yet enforced: the stages have no
+  //     Limits parameter yet, see tests/bad/KNOWN-GAPS.md) ----------------
+  /// Pages per output file (forme renders one page per description today).
+  std::size_t pages = 1;
   /// Most points in one series.
   std::size_t points_per_series = 1'000'000;
   /// Most direct labels placed on one page.

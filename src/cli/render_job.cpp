@@ -32,11 +32,12 @@ PageStyle style_for(const PageSpec& spec, const std::string& font_dir) {
   return st;
 }
 
-std::vector<Table> load_tables(const PageSpec& spec) {
+std::vector<Table> load_tables(const PageSpec& spec, const Limits& limits) {
   std::vector<Table> tables;
   for (const auto& src : spec.tables) {
     CsvOptions o;
     o.declared = src.declared;
+    o.max_bytes = limits.table_bytes;
     try {
       tables.push_back(read_csv(src.path, src.display_path, o));
     } catch (const InputError& e) {
@@ -83,7 +84,7 @@ DisplayPage compose_page(const std::string& page_path, const std::string& font_d
     for (auto& e : errors) sink.report(e);
     throw InputError(errors.front());
   }
-  std::vector<Table> tables = load_tables(*spec);                   // 2. load data
+  std::vector<Table> tables = load_tables(*spec, limits);                   // 2. load data
   std::vector<PanelData> panels = select_series(*spec, tables, sink);
   std::vector<PanelAxes> axes = resolve_axes(panels);               // 3. resolve scales
   PageStyle style = style_for(*spec, font_dir);                     // 4. measure text (fonts)
