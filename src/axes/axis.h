@@ -26,18 +26,26 @@ struct Axis {
   NumberFormat format;
   std::vector<std::string> categories;
   DatePrecision dates = DatePrecision::day;
+  bool log = false;       ///< logarithmic (base 10); lo and hi stay in data units
+  bool own_scale = false; ///< this panel's scale differs from its neighbours'
 };
 
 struct PanelAxes {
   Axis x, y;
 };
 
-/// One PanelAxes per panel, all sharing domains and ticks.
-std::vector<PanelAxes> resolve_axes(const std::vector<PanelData>& panels);
+/// One PanelAxes per panel. Panels showing the same columns share domains
+/// and ticks unless the grid frees a direction. Throws InputError for
+/// ranges that would mislead (bars not starting at zero, log scales over
+/// data that are not all positive).
+std::vector<PanelAxes> resolve_axes(const std::vector<PanelData>& panels, const GridSpec& grid);
 
 /// Smallest distance between neighbouring x values in any series (1 when
 /// no series has two distinct values): the width of one period on a time axis.
 double smallest_step(const std::vector<const PanelData*>& panels);
+
+/// The value axis title, restated when the values were transformed.
+std::string value_title(const PanelData& p, const AxisSpec& a);
 
 /// "Title (unit)", "Title", "unit", or "".
 std::string axis_title(const std::string& title, const std::string& unit);

@@ -1,9 +1,12 @@
 #include <algorithm>
+#include <charconv>
 #include <cmath>
 #include <limits>
 
 #include "axes/axis.h"
+#include "data/dates.h"
 #include "scale/date_ticks.h"
+#include "scale/scale.h"
 #include "scale/ticks.h"
 
 namespace forme {
@@ -12,6 +15,24 @@ std::string axis_title(const std::string& title, const std::string& unit) {
   if (title.empty()) return unit;
   if (unit.empty()) return title;
   return title + " (" + unit + ")";
+}
+
+std::string value_title(const PanelData& p, const AxisSpec& a) {
+  const TransformStatement& t = p.transform;
+  if (t.axis_title.empty()) return axis_title(a.title, a.unit);
+  return t.keeps_unit ? axis_title(t.axis_title, a.unit) : t.axis_title;
+}
+
+double smallest_step(const std::vector<const PanelData*>& panels) {
+  double step = std::numeric_limits<double>::infinity();
+  for (const PanelData* p : panels)
+    for (const auto& s : p->series) {
+      std::vector<double> xs = s.x;
+      std::sort(xs.begin(), xs.end());
+      for (std::size_t i = 1; i < xs.size(); ++i)
+        if (xs[i] > xs[i - 1]) step = std::min(step, xs[i] - xs[i - 1]);
+    }
+  return std::isfinite(step) ? step : 1.0;
 }
 
 namespace {
@@ -28,7 +49,35 @@ struct Extent {
   bool empty() const { return lo > hi; }
 };
 
-Axis number_axis(Extent e, bool from_zero, const std::optional<NumberFormat>& fmt) {
+bool bars(ChartKind k) { return k == ChartKind::vertical_bar || k == ChartKind::horizontal_bar; }
+
+// A value the author wrote for an axis end, in the axis's units.
+double author_value(const Located& v, AxisKind kind) {
+  if (kind == AxisKind::date) {
+    if (auto d = parse_date(v.value)) return d->day;
+    throw InputError(v.loc, "'" + v.value + "' is not a date", "write YYYY, YYYY-MM or YYYY-MM-DD");
+  }
+  double out = 0;
+  auto [end, ec] = std::from_chars(v.value.data(), v.value.data() + v.value.size(), out);
+  if (ec != std::errc() || end != v.value.data() + v.value.size() || !std::isfinite(out))
+    throw InputError(v.loc, "'" + v.value + "' is not a number");
+  return out;
+}
+
+void finish_number_format(Axis& a, const std::optional<NumberFormat>& fmt, int tick_decimals) {
+  a.format = fmt.value_or(NumberFormat{});
+  if (fmt && fmt->decimals >= 0) return;
+  // Enough decimals to tell every tick apart, counted in the printed unit:
+  // a fraction printed as a percent needs two fewer; SI prefixes choose
+  // their own (shortest exact) digits.
+  switch (a.format.style) {
+    case NumberFormat::Style::fraction_percent: a.format.decimals = std::max(0, tick_decimals - 2); break;
+    case NumberFormat::Style::si: a.format.decimals = -1; break;
+    default: a.format.decimals = std::max(0, tick_decimals); break;
+  }
+}
+
+Axis number_axis(Extent e, bool from_zero, const AxisSpec& spec) {
   Axis a;
   a.kind = AxisKind::number;
   if (e.empty()) e = {0, 1};
@@ -37,25 +86,37 @@ Axis number_axis(Extent e, bool from_zero, const std::optional<NumberFormat>& fm
     e.hi = std::max(e.hi, 0.0);
   }
   if (e.hi - e.lo <= 0) {
-    // One value (or all equal): give the axis a unit of room around it.
+    // One value (or all equal): give the axis room around it.
     double pad = e.lo == 0 ? 1 : std::abs(e.lo) * 0.1;
     e = {from_zero && e.lo >= 0 ? 0 : e.lo - pad, e.hi + pad};
   }
   Ticks t = extended_ticks(e.lo, e.hi, kWantedTicks, false);
-  a.format = fmt.value_or(NumberFormat{});
-  if (!fmt || fmt->decimals < 0) {
-    // Enough decimals to tell every tick apart, counted in the printed unit:
-    // a fraction printed as a percent needs two fewer; SI prefixes choose
-    // their own (shortest exact) digits.
-    switch (a.format.style) {
-      case NumberFormat::Style::fraction_percent: a.format.decimals = std::max(0, t.decimals - 2); break;
-      case NumberFormat::Style::si: a.format.decimals = -1; break;
-      default: a.format.decimals = std::max(0, t.decimals); break;
-    }
-  }
+  finish_number_format(a, spec.format, t.decimals);
   a.lo = std::min(e.lo, t.values.empty() ? e.lo : t.values.front());
   a.hi = std::max(e.hi, t.values.empty() ? e.hi : t.values.back());
   for (double v : t.values) a.ticks.push_back({v, format_number(v, a.format), false});
+  return a;
+}
+
+Axis log_axis(Extent e, const AxisSpec& spec) {
+  Axis a;
+  a.kind = AxisKind::number;
+  a.log = true;
+  LogScale s{e.lo, e.hi, 0, 1};
+  std::vector<double> ticks = s.ticks(kWantedTicks);
+  if (!ticks.empty()) {
+    a.lo = std::min(e.lo, ticks.front());
+    a.hi = std::max(e.hi, ticks.back());
+  } else {
+    a.lo = e.lo;
+    a.hi = e.hi;
+  }
+  if (a.hi <= a.lo) a.hi = a.lo * 10;
+  int decimals = 0;
+  for (double v : ticks)
+    if (v < 1) decimals = std::max(decimals, static_cast<int>(std::ceil(-std::log10(v) - 1e-9)));
+  finish_number_format(a, spec.format, decimals);
+  for (double v : ticks) a.ticks.push_back({v, format_number(v, a.format), false});
   return a;
 }
 
@@ -67,7 +128,7 @@ Axis date_axis(Extent e, DatePrecision precision, double pad) {
   if (e.hi <= e.lo) e = {e.lo - 15, e.hi + 15};
   a.lo = e.lo - pad;
   a.hi = e.hi + pad;
-  DateTicks dt = date_ticks(e.lo, e.hi, kWantedTicks + 1);
+  DateTicks dt = date_ticks(a.lo, a.hi, kWantedTicks + 1);
   for (const auto& t : dt.ticks)
     if (t.day >= a.lo - 1e-9 && t.day <= a.hi + 1e-9) a.ticks.push_back({t.day, t.label, t.major});
   return a;
@@ -83,59 +144,71 @@ Axis category_axis(const std::vector<std::string>& cats) {
   return a;
 }
 
-bool bars(ChartKind k) { return k == ChartKind::vertical_bar || k == ChartKind::horizontal_bar; }
-
-}  // namespace
-
-double smallest_step(const std::vector<const PanelData*>& panels) {
-  double step = std::numeric_limits<double>::infinity();
-  for (const PanelData* p : panels)
-    for (const auto& s : p->series) {
-      std::vector<double> xs = s.x;
-      std::sort(xs.begin(), xs.end());
-      for (std::size_t i = 1; i < xs.size(); ++i)
-        if (xs[i] > xs[i - 1]) step = std::min(step, xs[i] - xs[i - 1]);
-    }
-  return std::isfinite(step) ? step : 1.0;
-}
-
-namespace {
-
-// Axes for panels that show the same measure in the same way.
-PanelAxes shared_axes(const std::vector<const PanelData*>& panels) {
-  Extent ex, ey;
-  bool x_zero = false, y_zero = false;
-  for (const PanelData* p : panels) {
-    for (const auto& s : p->series) {
-      for (double v : s.x) ex.add(v);
-      for (double v : s.y) ey.add(v);
-    }
-    if (bars(p->kind)) (p->x_kind == AxisKind::category ? y_zero : x_zero) = true;
-  }
+// Builds one axis (x or y) over a set of panels that share it.
+Axis build_axis(const std::vector<const PanelData*>& panels, bool is_x) {
   const PanelData& first = *panels.front();
   const PanelSpec& spec = *first.spec;
-  // Bars on a date axis are one period wide: leave half a period of room
-  // beyond the first and last so the outer bars are not cut in half.
-  const double date_pad = bars(first.kind) ? smallest_step(panels) / 2 : 0;
-  auto make = [&](AxisKind kind, const Extent& e, bool zero, const AxisSpec& as, DatePrecision dp) {
-    Axis a = kind == AxisKind::category ? category_axis(first.categories)
-             : kind == AxisKind::date   ? date_axis(e, dp, date_pad)
-                                        : number_axis(e, zero, as.format);
+  const AxisSpec& as = is_x ? spec.x_axis : spec.y_axis;
+  const AxisKind kind = is_x ? first.x_kind : first.y_kind;
+  if (kind == AxisKind::category) {
+    Axis a = category_axis(first.categories);
     a.title = axis_title(as.title, as.unit);
     return a;
-  };
-  return {make(first.x_kind, ex, x_zero, spec.x_axis, first.x_dates),
-          make(first.y_kind, ey, y_zero, spec.y_axis, DatePrecision::day)};
+  }
+  Extent e;
+  bool from_zero = false;
+  for (const PanelData* p : panels) {
+    for (const auto& s : p->series)
+      for (double v : is_x ? s.x : s.y) e.add(v);
+    // Bar length encodes the value, so the value axis of bars shows zero.
+    const bool value_axis = is_x ? p->y_kind == AxisKind::category : p->x_kind == AxisKind::category ||
+                                                                        p->x_kind == AxisKind::date;
+    if (bars(p->kind) && value_axis) from_zero = true;
+    for (const auto& r : p->spec->references)
+      if (!is_x && r.y) e.add(*r.y);
+  }
+  if (!as.min.empty()) {
+    const double v = author_value(as.min, kind);
+    if (from_zero && v > 0)
+      throw InputError(as.min.loc, "bars must start at zero, so the axis cannot begin at " + as.min.value,
+                       "a bar's length stands for its value; a cut axis makes small differences look large. "
+                       "Use a line or dot panel to show values far from zero");
+    e.add(v);
+  }
+  if (!as.max.empty()) {
+    const double v = author_value(as.max, kind);
+    if (from_zero && v < 0)
+      throw InputError(as.max.loc, "bars must reach zero, so the axis cannot end at " + as.max.value,
+                       "a bar's length stands for its value; use a line or dot panel instead");
+    e.add(v);
+  }
+  Axis a;
+  if (kind == AxisKind::date) {
+    a = date_axis(e, first.x_dates, bars(first.kind) ? smallest_step(panels) / 2 : 0);
+  } else if (as.log) {
+    if (from_zero)
+      throw InputError(as.scale_loc, "bars cannot stand on a logarithmic scale, which has no zero",
+                       "use a dot or line panel for a log scale");
+    if (e.empty() || e.lo <= 0)
+      throw InputError(as.scale_loc, "a logarithmic scale needs strictly positive data, and this axis has values ≤ 0",
+                       "use a linear scale, or transform the data first");
+    a = log_axis(e, as);
+  } else {
+    a = number_axis(e, from_zero, as);
+  }
+  a.title = is_x ? axis_title(as.title, as.unit) : value_title(first, as);
+  if (a.log) a.title += a.title.empty() ? "Logarithmic scale" : " (log scale)";
+  return a;
 }
 
 }  // namespace
 
-std::vector<PanelAxes> resolve_axes(const std::vector<PanelData>& panels) {
+std::vector<PanelAxes> resolve_axes(const std::vector<PanelData>& panels, const GridSpec& grid) {
   // Panels share a scale when they show the same columns with the same
   // chart kind; a page mixing, say, a line and a bar panel has two scales.
   auto key = [](const PanelData& p) {
-    return std::to_string(static_cast<int>(p.kind)) + '\x1f' + p.spec->x.value + '\x1f' + p.spec->y.value +
-           '\x1f' + std::to_string(static_cast<int>(p.x_kind)) + std::to_string(static_cast<int>(p.y_kind));
+    return std::to_string(static_cast<int>(p.kind)) + '\x1f' + p.spec->x.value + '\x1f' + p.spec->y.value + '\x1f' +
+           std::to_string(static_cast<int>(p.x_kind)) + std::to_string(static_cast<int>(p.y_kind));
   };
   std::vector<PanelAxes> out(panels.size());
   std::vector<bool> done(panels.size(), false);
@@ -149,12 +222,19 @@ std::vector<PanelAxes> resolve_axes(const std::vector<PanelData>& panels) {
         members.push_back(j);
         done[j] = true;
       }
-    PanelAxes shared = shared_axes(group);
+    const Axis shared_x = build_axis(group, true), shared_y = build_axis(group, false);
     for (std::size_t j : members) {
-      out[j] = shared;
+      std::vector<const PanelData*> one{&panels[j]};
+      const bool own_x = grid.free_x && group.size() > 1 && panels[j].x_kind != AxisKind::category;
+      const bool own_y = grid.free_y && group.size() > 1 && panels[j].y_kind != AxisKind::category;
+      out[j].x = own_x ? build_axis(one, true) : shared_x;
+      out[j].y = own_y ? build_axis(one, false) : shared_y;
+      out[j].x.own_scale = own_x;
+      out[j].y.own_scale = own_y;
       // Explicit panel lists may title their axes differently.
-      out[j].x.title = axis_title(panels[j].spec->x_axis.title, panels[j].spec->x_axis.unit);
-      out[j].y.title = axis_title(panels[j].spec->y_axis.title, panels[j].spec->y_axis.unit);
+      out[j].x.title = one.front()->spec == group.front()->spec ? out[j].x.title
+                                                               : axis_title(panels[j].spec->x_axis.title, panels[j].spec->x_axis.unit);
+      if (!out[j].y.log) out[j].y.title = value_title(panels[j], panels[j].spec->y_axis);
     }
   }
   return out;

@@ -86,7 +86,7 @@ DisplayPage compose_page(const std::string& page_path, const std::string& font_d
   }
   std::vector<Table> tables = load_tables(*spec, limits);                   // 2. load data
   std::vector<PanelData> panels = select_series(*spec, tables, sink);
-  std::vector<PanelAxes> axes = resolve_axes(panels);               // 3. resolve scales
+  std::vector<PanelAxes> axes = resolve_axes(panels, spec->grid);   // 3. resolve scales
   PageStyle style = style_for(*spec, font_dir);                     // 4. measure text (fonts)
   return layout_page(*spec, panels, axes, style, sink);             // 5-6. lay out, place labels
 }

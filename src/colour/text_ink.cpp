@@ -7,7 +7,9 @@ namespace forme {
 
 Rgb text_ink(const Rgb& colour, const Rgb& background, double ratio) {
   if (meets(contrast_ratio(colour, background), ratio)) return colour;
-  const OkLch c = to_oklch(colour);
+  OkLch c = to_oklch(colour);
+  // A grey's hue is numerical noise; darken it as an exact grey.
+  if (c.c < 1e-4) c.c = 0;
   // Bisect on lightness: contrast against a light paper grows as L falls.
   double lo = 0, hi = c.l;
   for (int i = 0; i < 40; ++i) {

@@ -37,7 +37,30 @@ struct AxisSpec {
   std::string title;  ///< e.g. "Stored"
   std::string unit;   ///< e.g. "% of capacity"
   std::optional<NumberFormat> format;
+  Located min, max;   ///< values the axis must show, as written (numbers or dates)
+  bool log = false;   ///< logarithmic scale
+  SourceLoc scale_loc;
 };
+
+/// A restatement of the values that the page states in words.
+struct TransformSpec {
+  enum class Kind { none, index, percent_change, difference, share };
+  Kind kind = Kind::none;
+  Located base;   ///< index: x value that becomes 100
+  Located minus;  ///< difference: series subtracted
+  int lag = 1;    ///< percent-change: steps back
+  SourceLoc loc;
+};
+
+struct ReferenceLine {
+  std::optional<double> y;  ///< horizontal line at this value
+  Located x;                ///< vertical line at this value (number or date)
+  std::string label;
+  SourceLoc loc;
+};
+
+enum class Trend { none, line, line_with_equation };
+enum class AspectRule { fill, bank_median_slope, bank_orientation };
 
 struct PanelSpec {
   ChartKind kind = ChartKind::line;
@@ -46,6 +69,11 @@ struct PanelSpec {
   AxisSpec x_axis, y_axis;
   /// Rows kept: column → wanted cell text (all must match).
   std::vector<std::pair<Located, std::string>> where;
+  TransformSpec transform;
+  std::vector<ReferenceLine> references;
+  Trend trend = Trend::none;
+  AspectRule aspect = AspectRule::fill;
+  SourceLoc aspect_loc;
   SourceLoc loc;  ///< the panel mapping (or grid) this came from
 };
 
@@ -55,6 +83,9 @@ struct GridSpec {
   Located one_panel_per;  ///< column whose distinct values each get a panel
   std::vector<std::string> order;  ///< optional order of those values
   double gap = 0;   ///< points between panels; 0 = automatic
+  bool free_x = false, free_y = false;  ///< panels have their own scales (the page says so)
+  std::optional<bool> outer_labels;     ///< tick labels on outer panels only; unset = by grid size
+  SourceLoc scales_loc;
   SourceLoc loc;
 };
 

@@ -169,6 +169,13 @@ class Builder {
     if (auto o = n["order"])
       for (const auto& v : o) g.order.push_back(v.Scalar());
     if (n["gap"]) g.gap = *parse_length(n["gap"].Scalar());
+    if (auto s = n["scales"]) {
+      const std::string& v = s.Scalar();
+      g.free_x = v == "free-x" || v == "free";
+      g.free_y = v == "free-y" || v == "free";
+      g.scales_loc = doc_.loc(s);
+    }
+    if (auto t = n["tick-labels"]) g.outer_labels = t.Scalar() == "outer";
     return g;
   }
 
@@ -224,12 +231,68 @@ class Builder {
     if (n["y-title"]) p.y_axis.title = n["y-title"].Scalar();
     if (n["y-unit"]) p.y_axis.unit = n["y-unit"].Scalar();
     if (n["y-format"]) p.y_axis.format = format(n["y-format"]);
+    axis_extras(n, "x", p.x_axis);
+    axis_extras(n, "y", p.y_axis);
+    if (auto t = n["transform"]) p.transform = transform(t);
+    if (auto refs = n["references"]) {
+      p.references.clear();
+      for (const auto& r : refs) p.references.push_back(reference(r));
+    }
+    if (auto t = n["trend"])
+      p.trend = t.Scalar() == "line" ? Trend::line : t.Scalar() == "line-with-equation" ? Trend::line_with_equation : Trend::none;
+    if (auto a = n["aspect"]) {
+      p.aspect = a.Scalar() == "bank-median-slope"  ? AspectRule::bank_median_slope
+                 : a.Scalar() == "bank-orientation" ? AspectRule::bank_orientation
+                                                    : AspectRule::fill;
+      p.aspect_loc = doc_.loc(a);
+    }
     if (auto w = n["where"]) {
       p.where.clear();
       for (auto it = w.begin(); it != w.end(); ++it)
         p.where.push_back({located(it->first), it->second.Scalar()});
     }
     return p;
+  }
+
+  void axis_extras(const YAML::Node& n, const std::string& axis, AxisSpec& a) {
+    if (auto v = n[axis + "-min"]) a.min = located(v);
+    if (auto v = n[axis + "-max"]) a.max = located(v);
+    if (auto v = n[axis + "-scale"]) {
+      a.log = v.Scalar() == "log";
+      a.scale_loc = doc_.loc(v);
+    }
+  }
+
+  TransformSpec transform(const YAML::Node& n) {
+    TransformSpec t;
+    t.loc = doc_.loc(n);
+    const std::string& k = n["kind"].Scalar();
+    t.kind = k == "index"            ? TransformSpec::Kind::index
+             : k == "percent-change" ? TransformSpec::Kind::percent_change
+             : k == "difference"     ? TransformSpec::Kind::difference
+                                     : TransformSpec::Kind::share;
+    if (n["base"]) t.base = located(n["base"]);
+    if (n["minus"]) t.minus = located(n["minus"]);
+    if (n["lag"]) {
+      t.lag = n["lag"].as<int>();
+      if (t.lag < 1) throw InputError(doc_.loc(n["lag"]), "lag must be 1 or more");
+    }
+    if (t.kind == TransformSpec::Kind::index && t.base.empty())
+      throw InputError(t.loc, "an index needs its base", "add 'base:' naming the x value that becomes 100");
+    if (t.kind == TransformSpec::Kind::difference && t.minus.empty())
+      throw InputError(t.loc, "a difference needs the series to subtract", "add 'minus:' naming a series");
+    return t;
+  }
+
+  ReferenceLine reference(const YAML::Node& n) {
+    ReferenceLine r;
+    r.loc = doc_.loc(n);
+    if (n["y"]) r.y = std::stod(n["y"].Scalar());
+    if (n["x"]) r.x = located(n["x"]);
+    if (n["label"]) r.label = n["label"].Scalar();
+    if (r.y.has_value() == !r.x.empty())
+      throw InputError(r.loc, "a reference line needs exactly one of 'y' and 'x'");
+    return r;
   }
 
   const YamlDocument& doc_;

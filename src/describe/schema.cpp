@@ -88,8 +88,12 @@ struct Schema {
     return n;
   }();
 
+  NodeSpec scales = choice("shared, free-x, free-y or free", {"shared", "free-x", "free-y", "free"});
+  NodeSpec tick_labels = choice("outer or every-panel", {"outer", "every-panel"});
   NodeSpec grid = mapping("the panel grid",
       {{"columns", &integer, false, "panels across"},
+       {"scales", &scales, false, "shared (default): every panel on one scale; free-x, free-y, free: each panel its own (the page says so)"},
+       {"tick-labels", &tick_labels, false, "outer: tick labels on the outer panels only (default for grids larger than 2 x 2); every-panel"},
        {"rows", &integer, false, "panels down"},
        {"one-panel-per", &text, false, "a column: one panel for each of its distinct values"},
        {"order", &text_list, false, "order of the one-panel-per values"},
@@ -116,6 +120,26 @@ struct Schema {
     n.any_key = &text;
     return n;
   }();
+  NodeSpec number = scalar("a number", ScalarType::number);
+  NodeSpec axis_scale = choice("linear or log", {"linear", "log"});
+  NodeSpec transform_kind = choice("a transform", {"index", "percent-change", "difference", "share"});
+  NodeSpec transform = mapping("a transform of the values",
+      {{"kind", &transform_kind, true, "index (base = 100), percent-change, difference (between two series), share (of the total at each x)"},
+       {"base", &text, false, "index: the x value that becomes 100"},
+       {"minus", &text, false, "difference: the series subtracted from every other"},
+       {"lag", &integer, false, "percent-change: how many steps back to compare with (default 1)"}});
+  NodeSpec reference = mapping("a reference line",
+      {{"y", &number, false, "draw a horizontal line at this value"},
+       {"x", &text, false, "draw a vertical line at this value (a number or a date)"},
+       {"label", &text, false, "what the line marks, e.g. Target"}});
+  NodeSpec references = list_of("a list of reference lines", &reference);
+  NodeSpec trend = choice("none, line or line-with-equation", {"none", "line", "line-with-equation"});
+  NodeSpec aspect = choice("an aspect rule", {"fill", "bank-median-slope", "bank-orientation"});
+  NodeSpec refused = [&] {
+    NodeSpec n = scalar("nothing: forme draws one value axis per panel", ScalarType::text);
+    n.refused = "a second value axis lets the author choose where two lines cross; draw two panels, aligned on the same x, instead";
+    return n;
+  }();
   NodeSpec panel = mapping("a panel",
       {{"kind", &kind, false, "line, vertical-bar, horizontal-bar or dot"},
        {"table", &text, false, "name of a table under 'tables'"},
@@ -129,7 +153,18 @@ struct Schema {
        {"x-format", &format, false, "number format of the horizontal axis"},
        {"y-title", &text, false, "vertical axis title"},
        {"y-unit", &text, false, "unit of the vertical axis"},
-       {"y-format", &format, false, "number format of the vertical axis"}});
+       {"y-format", &format, false, "number format of the vertical axis"},
+       {"x-min", &text, false, "lowest value the horizontal axis must show"},
+       {"x-max", &text, false, "highest value the horizontal axis must show"},
+       {"y-min", &number, false, "lowest value the vertical axis must show (bars always include zero)"},
+       {"y-max", &number, false, "highest value the vertical axis must show"},
+       {"x-scale", &axis_scale, false, "linear (default) or log (strictly positive data only)"},
+       {"y-scale", &axis_scale, false, "linear (default) or log (strictly positive data only)"},
+       {"transform", &transform, false, "restate the values: index, percent-change, difference or share; the page says what was done"},
+       {"references", &references, false, "reference lines: targets, thresholds, averages"},
+       {"trend", &trend, false, "dot panels: least-squares trend line, optionally with its equation"},
+       {"aspect", &aspect, false, "line panels: fill the cell, or bank the lines to 45 degrees"},
+       {"y-right", &refused, false, "not available: forme refuses a second value axis"}});
   NodeSpec panels = list_of("a list of panels", &panel);
 
   NodeSpec type = mapping("type settings", {{"size", &length, false, "base text size (tick labels, notes)"}});

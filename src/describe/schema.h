@@ -38,6 +38,9 @@ struct NodeSpec {
   bool list_ok = false;
   const NodeSpec* item = nullptr;
   std::string_view doc;
+  /// When set, any value is refused with this explanation (for keys an
+  /// author may reach for that forme deliberately does not offer).
+  std::string_view refused;
 
   const KeySpec* find_key(std::string_view k) const {
     for (const auto& ks : keys)

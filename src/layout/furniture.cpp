@@ -5,7 +5,8 @@
 
 namespace forme {
 
-double set_heading(const PageSpec& spec, const PageStyle& st, const Rect& content, DisplayPage& page) {
+double set_heading(const PageSpec& spec, const std::string& standfirst, const PageStyle& st, const Rect& content,
+                   DisplayPage& page) {
   double y = content.y;
   bool any = false;
   if (!spec.title.empty()) {
@@ -17,13 +18,13 @@ double set_heading(const PageSpec& spec, const PageStyle& st, const Rect& conten
     }
     any = true;
   }
-  if (!spec.standfirst.empty()) {
+  if (!standfirst.empty()) {
     const double size = st.standfirst_size();
     y += any ? size * 0.2 : 0;
     // A measure of about 80 characters reads comfortably (common practice).
     const double measure = std::min(content.w, size * 0.5 * 80);
     const double lead = PageStyle::line_height(st.fonts.regular, size);
-    for (auto& line : wrap_text(spec.standfirst, st.fonts.regular, size, measure)) {
+    for (auto& line : wrap_text(standfirst, st.fonts.regular, size, measure)) {
       page.add(text_at(line, content.x, y + line.ascent, Align::left, st.ink.muted, TextRole::standfirst));
       y += lead;
     }

@@ -10,7 +10,9 @@ namespace forme {
 
 /// Sets the heading from the top of `content`; returns the height used
 /// (including the space after it).
-double set_heading(const PageSpec& spec, const PageStyle& style, const Rect& content, DisplayPage& page);
+/// `standfirst` is the author's, extended with what forme did to the values.
+double set_heading(const PageSpec& spec, const std::string& standfirst, const PageStyle& style, const Rect& content,
+                   DisplayPage& page);
 
 /// Sets source and notes against the bottom of `content`; returns the
 /// height used (including the space above it).

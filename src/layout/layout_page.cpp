@@ -3,7 +3,9 @@
 #include <algorithm>
 #include <cmath>
 
+#include "layout/aspect.h"
 #include "layout/axis_marks.h"
+#include "layout/guides.h"
 #include "layout/furniture.h"
 #include "layout/grid_shape.h"
 #include "layout/marks/marks.h"
@@ -15,7 +17,30 @@ namespace {
 
 // Small multiples larger than 2 × 2 label only their outer edges: the scale
 // is shared, so inner panels repeat nothing the reader needs.
-bool outer_labels_only(const GridShape& g) { return g.columns * g.rows > 4; }
+bool outer_labels_only(const GridSpec& spec, const GridShape& g) {
+  return spec.outer_labels.value_or(g.columns * g.rows > 4);
+}
+
+// What forme did to the values, in words, once each.
+std::string extended_standfirst(const PageSpec& spec, const std::vector<PanelData>& panels) {
+  std::string out = spec.standfirst;
+  std::vector<std::string> said;
+  for (const auto& p : panels)
+    if (!p.transform.sentence.empty() && std::find(said.begin(), said.end(), p.transform.sentence) == said.end())
+      said.push_back(p.transform.sentence);
+  for (const auto& s : said) out += (out.empty() ? "" : " ") + s;
+  return out;
+}
+
+// A page whose panels do not share a scale says so, in the footer.
+std::vector<std::string> scale_notes(const std::vector<PanelAxes>& axes) {
+  bool own_x = false, own_y = false;
+  for (const auto& a : axes) own_x |= a.x.own_scale, own_y |= a.y.own_scale;
+  if (own_x && own_y) return {"Scales differ between panels: each panel's axes have their own range; compare positions only within a panel."};
+  if (own_y) return {"Scales differ between panels: each panel's vertical axis has its own range; compare heights only within a panel."};
+  if (own_x) return {"Scales differ between panels: each panel's horizontal axis has its own range."};
+  return {};
+}
 
 // The same series keeps its colour in every panel. A panel's lone unnamed
 // series takes the first colour.
@@ -78,21 +103,23 @@ DisplayPage layout_page(const PageSpec& spec, const std::vector<PanelData>& pane
   const Margins& mg = spec.sheet.margins;
   Rect content{mg.left, mg.top, page.width - mg.left - mg.right, page.height - mg.top - mg.bottom};
 
-  const double head = set_heading(spec, st, content, page);
-  const double foot = set_footer(spec, st, content, page, {});
+  const double head = set_heading(spec, extended_standfirst(spec, panels), st, content, page);
+  const double foot = set_footer(spec, st, content, page, scale_notes(axes));
   Rect area{content.x, content.y + head, content.w, content.h - head - foot};
 
   const GridShape g = grid_shape(spec.grid, static_cast<int>(panels.size()));
-  const bool outer = outer_labels_only(g);
+  const bool outer = outer_labels_only(spec.grid, g);
+  const bool own_x = spec.grid.free_x, own_y = spec.grid.free_y;
   const double gap = spec.grid.gap > 0 ? spec.grid.gap : st.base * 2.2;
   const double est_w = (area.w - gap * (g.columns - 1)) / g.columns;
   const GridMeasure m = measure_grid(panels, axes, st, est_w * 0.8);
   const double pad = st.base * 0.3;
 
   // Column c's left inset holds y labels; row r's bottom inset holds x labels.
-  auto shows_y = [&](int c) { return !outer || c == 0; };
+  // A panel on a scale of its own always carries its own tick labels.
+  auto shows_y = [&](int c) { return !outer || own_y || c == 0; };
   auto shows_x = [&](int index) {
-    if (!outer) return true;
+    if (!outer || own_x) return true;
     return index + g.columns >= static_cast<int>(panels.size());  // nothing below it
   };
   std::vector<double> left(static_cast<std::size_t>(g.columns)), bottom(static_cast<std::size_t>(g.rows));
@@ -111,8 +138,20 @@ DisplayPage layout_page(const PageSpec& spec, const std::vector<PanelData>& pane
     }
     sum_bottom += bottom[static_cast<std::size_t>(r)] = any ? row_band[static_cast<std::size_t>(r)] + m.x_title : st.base * 0.4;
   }
-  const double plot_w = (area.w - sum_left - g.columns * m.right - gap * (g.columns - 1)) / g.columns;
-  const double plot_h = (area.h - sum_bottom - g.rows * m.top - gap * (g.rows - 1)) / g.rows;
+  double plot_w = (area.w - sum_left - g.columns * m.right - gap * (g.columns - 1)) / g.columns;
+  double plot_h = (area.h - sum_bottom - g.rows * m.top - gap * (g.rows - 1)) / g.rows;
+  // Banking shapes the shared inner box, within the cell it has.
+  const PanelSpec& first = *panels.front().spec;
+  if (first.kind == ChartKind::line)
+    if (auto alpha = banked_aspect(panels, axes, first.aspect)) {
+      if (*alpha * plot_w <= plot_h) plot_h = *alpha * plot_w;
+      else plot_w = plot_h / *alpha;
+      warnings.report({Severity::note, first.aspect_loc,
+                       "lines banked to 45 degrees: plot areas are " + std::to_string(static_cast<int>(std::lround(plot_w))) +
+                           " x " + std::to_string(static_cast<int>(std::lround(plot_h))) + " pt (height/width " +
+                           std::to_string(*alpha).substr(0, 5) + ")",
+                       {}});
+    }
   if (plot_w < st.base * 4 || plot_h < st.base * 4)
     throw InputError(spec.grid.loc,
                      "the panels do not fit: each plot would be " + std::to_string(static_cast<int>(plot_w)) + " × " +
@@ -151,7 +190,10 @@ DisplayPage layout_page(const PageSpec& spec, const std::vector<PanelData>& pane
     }
 
     draw_axis_backdrop(f, st, page);
-    draw_marks(MarkContext{panels[i], f, st, colours, name_series}, page);
+    const MarkContext ctx{panels[i], f, st, colours, name_series};
+    draw_marks(ctx, page);
+    draw_trend_lines(ctx, page);
+    draw_reference_lines(ctx, page);
     draw_axis_labels(f, st, AxisLabelling{shows_x(static_cast<int>(i)), shows_y(c)}, page);
     if (!f.x.title.empty() && shows_x(static_cast<int>(i))) {
       auto t = shape_text(f.x.title, st.fonts.regular, st.label_size());
@@ -160,7 +202,6 @@ DisplayPage layout_page(const PageSpec& spec, const std::vector<PanelData>& pane
                        Align::centre, st.ink.muted, TextRole::axis_title));
     }
   }
-  (void)warnings;
   return page;
 }
 

@@ -18,6 +18,13 @@ struct Series {
   std::vector<double> y;
 };
 
+/// What a transform did, for the page to say.
+struct TransformStatement {
+  std::string axis_title;  ///< e.g. "Index, 2020 = 100"
+  std::string sentence;    ///< e.g. "Values are indexed to 2020 = 100."
+  bool keeps_unit = false; ///< the values keep the data's unit (a difference does)
+};
+
 struct PanelData {
   const PanelSpec* spec = nullptr;
   std::string title;
@@ -28,6 +35,7 @@ struct PanelData {
   std::vector<std::string> categories;
   std::vector<Series> series;
   std::size_t rows_used = 0;
+  TransformStatement transform;  ///< what was done to the values, if anything
 };
 
 }  // namespace forme

@@ -5,6 +5,7 @@
 #include <map>
 
 #include "describe/suggest.h"
+#include "series/apply_transform.h"
 
 namespace forme {
 
@@ -114,6 +115,7 @@ PanelData build_panel(const PanelSpec& p, const Table& t, const std::vector<std:
       }
       s = std::move(sorted);
     }
+  d.transform = apply_transform(p.transform, d);
   return d;
 }
 

@@ -1,0 +1,142 @@
+#include "layout/guides.h"
+
+#include <cmath>
+#include <cstdio>
+
+#include "colour/text_ink.h"
+#include "data/dates.h"
+#include "layout/text_items.h"
+#include "scale/fit.h"
+
+namespace forme {
+
+namespace {
+
+// Significant figures as fixed decimals: 3.0009 -> "3.00", 0.50009 -> "0.500".
+std::string sig3(double v) {
+  if (v == 0) return "0";
+  int decimals = std::max(0, 2 - static_cast<int>(std::floor(std::log10(std::abs(v)))));
+  char buf[64];
+  std::snprintf(buf, sizeof buf, "%.*f", decimals, std::abs(v));
+  return buf;
+}
+
+double reference_x(const ReferenceLine& r, const Axis& x) {
+  if (x.kind == AxisKind::date) {
+    if (auto d = parse_date(r.x.value)) return d->day;
+    throw InputError(r.x.loc, "'" + r.x.value + "' is not a date", "write YYYY, YYYY-MM or YYYY-MM-DD");
+  }
+  if (x.kind == AxisKind::category) {
+    for (std::size_t i = 0; i < x.categories.size(); ++i)
+      if (x.categories[i] == r.x.value) return static_cast<double>(i);
+    throw InputError(r.x.loc, "'" + r.x.value + "' is not one of the categories on this axis");
+  }
+  try {
+    std::size_t used = 0;
+    double v = std::stod(r.x.value, &used);
+    if (used == r.x.value.size()) return v;
+  } catch (const std::exception&) {
+  }
+  throw InputError(r.x.loc, "'" + r.x.value + "' is not a number");
+}
+
+bool segment_hits(const Rect& r, Point a, Point b) {
+  // Sample the segment finely; labels are many times larger than the step.
+  for (int i = 0; i <= 64; ++i) {
+    const double t = i / 64.0;
+    if (r.contains({a.x + (b.x - a.x) * t, a.y + (b.y - a.y) * t})) return true;
+  }
+  return false;
+}
+
+// The equation goes in a corner of the plot that no dot and no trend line
+// crosses: the corners off the line's diagonal first.
+Rect equation_box(const MarkContext& ctx, const ShapedText& t, const LinearFit& fit, const std::vector<Point>& line) {
+  const PlotFrame& f = ctx.frame;
+  const double pad = ctx.style.base * 0.4;
+  const double w = t.width, h = t.height();
+  const Rect tl{f.plot.left() + pad, f.plot.top() + pad, w, h};
+  const Rect tr{f.plot.right() - pad - w, f.plot.top() + pad, w, h};
+  const Rect bl{f.plot.left() + pad, f.plot.bottom() - pad - h, w, h};
+  const Rect br{f.plot.right() - pad - w, f.plot.bottom() - pad - h, w, h};
+  const std::vector<Rect> order = fit.slope >= 0 ? std::vector<Rect>{tl, br, tr, bl} : std::vector<Rect>{tr, bl, tl, br};
+  const double r = ctx.style.dot_radius() * 1.2;
+  for (const Rect& c : order) {
+    bool clear = !segment_hits(c.inflate(pad / 2), line[0], line[1]);
+    for (const auto& s : ctx.data.series)
+      for (std::size_t i = 0; i < s.x.size() && clear; ++i)
+        clear = !Rect{f.px(s.x[i]) - r, f.py(s.y[i]) - r, 2 * r, 2 * r}.overlaps(c.inflate(pad / 2));
+    if (clear) return c;
+  }
+  return order.front();
+}
+
+}  // namespace
+
+std::string trend_equation(double intercept, double slope) {
+  const char* minus = "\u2212";
+  std::string s = "y = ";
+  s += (intercept < 0 ? std::string(minus) : std::string()) + sig3(intercept);
+  s += slope < 0 ? std::string(" ") + minus + " " : std::string(" + ");
+  s += sig3(slope) + "x";
+  return s;
+}
+
+void draw_reference_lines(const MarkContext& ctx, DisplayPage& page) {
+  const PlotFrame& f = ctx.frame;
+  const PageStyle& st = ctx.style;
+  const Stroke dashed{st.ink.rule, st.rule_width() * 1.8, {st.base * 0.5, st.base * 0.3}, false};
+  for (const auto& r : ctx.data.spec->references) {
+    PathItem line;
+    line.stroke = dashed;
+    if (r.y) {
+      const double y = f.py(*r.y);
+      line.points = {{f.plot.left(), y}, {f.plot.right(), y}};
+      page.add(std::move(line));
+      if (!r.label.empty()) {
+        ShapedText t = shape_text(r.label, st.fonts.regular, st.label_size());
+        const double gap = st.base * 0.25;
+        page.add(text_at(std::move(t), f.plot.right() - gap, y - gap - st.fonts.regular->descent_em() * st.label_size(),
+                         Align::right, st.ink.text, TextRole::value_label));
+      }
+    } else {
+      const double x = f.px(reference_x(r, f.x));
+      line.points = {{x, f.plot.top()}, {x, f.plot.bottom()}};
+      page.add(std::move(line));
+      if (!r.label.empty()) {
+        ShapedText t = shape_text(r.label, st.fonts.regular, st.label_size());
+        page.add(text_at(std::move(t), x + st.base * 0.3, f.plot.top() + st.fonts.regular->ascent_em() * st.label_size(),
+                         Align::left, st.ink.text, TextRole::value_label));
+      }
+    }
+  }
+}
+
+void draw_trend_lines(const MarkContext& ctx, DisplayPage& page) {
+  const PanelSpec& spec = *ctx.data.spec;
+  if (spec.trend == Trend::none || ctx.data.kind != ChartKind::dot) return;
+  if (ctx.data.x_kind != AxisKind::number || ctx.data.y_kind != AxisKind::number)
+    throw InputError(spec.loc, "a trend line needs numbers on both axes", "use 'trend' on a dot panel of two number columns");
+  const PlotFrame& f = ctx.frame;
+  const PageStyle& st = ctx.style;
+  for (const auto& s : ctx.data.series) {
+    auto fit = fit_line(s.x, s.y);
+    if (!fit) continue;
+    double x0 = s.x.front(), x1 = s.x.front();
+    for (double v : s.x) x0 = std::min(x0, v), x1 = std::max(x1, v);
+    const Rgb colour = ctx.colours.at(s.name);
+    PathItem line;
+    line.points = {{f.px(x0), f.py(fit->intercept + fit->slope * x0)}, {f.px(x1), f.py(fit->intercept + fit->slope * x1)}};
+    line.stroke = Stroke{text_ink(colour, st.ink.paper, 3.0), st.line_width() * 0.8, {}, true};
+    const std::vector<Point> ends = line.points;
+    page.add(std::move(line));
+    if (spec.trend == Trend::line_with_equation) {
+      ShapedText t = shape_text(trend_equation(fit->intercept, fit->slope), st.fonts.regular, st.label_size());
+      const Rect where = equation_box(ctx, t, *fit, ends);
+      page.add(text_at(std::move(t), where.x, where.y + st.fonts.regular->ascent_em() * st.label_size(), Align::left,
+                       text_ink(colour, st.ink.paper), TextRole::value_label));
+    }
+  }
+}
+
+}  // namespace forme

@@ -1,0 +1,19 @@
+#pragma once
+/// Reading aids drawn over a panel: reference lines (targets, thresholds,
+/// averages) and least-squares trend lines on dot panels.
+#include "layout/marks/marks.h"
+
+namespace forme {
+
+/// Dashed lines at the author's values, each with its label at the right end.
+void draw_reference_lines(const MarkContext& ctx, DisplayPage& page);
+
+/// One ordinary least-squares line per series of a numeric dot panel, across
+/// the series' own x range, optionally labelled with its equation.
+void draw_trend_lines(const MarkContext& ctx, DisplayPage& page);
+
+/// "y = 3.00 + 0.500x": the intercept to 3 significant figures, the slope
+/// to 3 significant figures, Unicode minus for negatives.
+std::string trend_equation(double intercept, double slope);
+
+}  // namespace forme
