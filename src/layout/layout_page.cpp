@@ -174,6 +174,7 @@ DisplayPage layout_page(const PageSpec& spec, const std::vector<PanelData>& pane
     x += left[static_cast<std::size_t>(c)];
     y += m.top;
     PlotFrame f{{x, y, plot_w, plot_h}, axes[i].x, axes[i].y};
+    page.plot_areas.push_back(f.plot);
 
     // Panel title, then the y axis title with its unit, above the plot.
     double ty = y - m.top;

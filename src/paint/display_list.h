@@ -56,6 +56,9 @@ struct DisplayPage {
   double width = 0, height = 0;  ///< sheet size, points
   std::vector<DisplayItem> items;
   std::string title;  ///< document title for metadata
+  /// Where layout put each panel's plot area, in panel order. Painters
+  /// ignore it; checks and tests read it.
+  std::vector<Rect> plot_areas;
 
   void add(DisplayItem item) { items.push_back(std::move(item)); }
 };
