@@ -2,7 +2,9 @@
 /// One interface for every output format. A painter receives whole pages
 /// and writes them to a stream; formats differ only in how they open a
 /// Cairo surface and finish the file.
+#include <cstdint>
 #include <memory>
+#include <optional>
 #include <ostream>
 #include <string>
 
@@ -15,6 +17,10 @@ enum class OutputFormat { pdf, svg, png };
 struct DocumentInfo {
   std::string title;
   std::string creator = "forme";
+  /// When the document was made, in seconds since 1970-01-01T00:00:00Z;
+  /// nullopt dates it at the time of painting. Fixing it (the driver takes
+  /// SOURCE_DATE_EPOCH) makes repeated PDF output byte-identical.
+  std::optional<std::int64_t> creation_time;
 };
 
 class Painter {

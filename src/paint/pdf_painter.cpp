@@ -1,9 +1,15 @@
 // PDF output: vector pages, fonts embedded as subsets by Cairo.
 #include <cairo-pdf.h>
 
+#include <ctime>
+#include <stdexcept>
+#include <sstream>
+
 #include "paint/cairo_stream.h"
 #include "paint/draw_cairo.h"
 #include "paint/painter.h"
+#include "paint/pdf_creation_date.h"
+#include "paint/pdf_dates.h"
 
 namespace forme {
 
@@ -19,7 +25,7 @@ class PdfPainter final : public Painter {
 
   void paint(const DisplayPage& page) override {
     if (!surface_) {
-      surface_ = cairo_pdf_surface_create_for_stream(write_to_ostream, &out_, page.width, page.height);
+      surface_ = cairo_pdf_surface_create_for_stream(write_to_ostream, &buffer_, page.width, page.height);
       check_cairo(cairo_surface_status(surface_), "PDF surface");
       cairo_pdf_surface_restrict_to_version(surface_, CAIRO_PDF_VERSION_1_5);
       const std::string& title = options_.info.title.empty() ? page.title : options_.info.title;
@@ -42,10 +48,17 @@ class PdfPainter final : public Painter {
     check_cairo(cairo_surface_status(surface_), "PDF file");
     cairo_surface_destroy(surface_);
     surface_ = nullptr;
+    // Cairo's own date is the time of painting and cannot be set in the
+    // form ISO 32000-1 §7.9.4 asks for, so the date is written afterwards.
+    const std::int64_t when = options_.info.creation_time.value_or(static_cast<std::int64_t>(std::time(nullptr)));
+    const std::string bytes = set_pdf_creation_date(std::move(buffer_).str(), pdf_date_utc(when));
+    out_.write(bytes.data(), static_cast<std::streamsize>(bytes.size()));
+    if (!out_) throw std::runtime_error("PDF file: write failed");
   }
 
  private:
   std::ostream& out_;
+  std::ostringstream buffer_;  ///< Cairo's output, finished before it reaches out_
   PaintOptions options_;
   cairo_surface_t* surface_ = nullptr;
   cairo_t* cr_ = nullptr;

@@ -2,11 +2,13 @@
 // once and reuses.
 #include <cairo-svg.h>
 
+#include <sstream>
 #include <stdexcept>
 
 #include "paint/cairo_stream.h"
 #include "paint/draw_cairo.h"
 #include "paint/painter.h"
+#include "paint/svg_ids.h"
 
 namespace forme {
 
@@ -19,7 +21,8 @@ class SvgPainter final : public Painter {
   void paint(const DisplayPage& page) override {
     if (painted_) throw std::runtime_error("SVG holds one page; write a PDF for several");
     painted_ = true;
-    cairo_surface_t* s = cairo_svg_surface_create_for_stream(write_to_ostream, &out_, page.width, page.height);
+    std::ostringstream buffer;  // Cairo's output, before its ids are made stable
+    cairo_surface_t* s = cairo_svg_surface_create_for_stream(write_to_ostream, &buffer, page.width, page.height);
     cairo_svg_surface_set_document_unit(s, CAIRO_SVG_UNIT_PT);
     cairo_t* cr = cairo_create(s);
     draw_page(cr, page);
@@ -30,6 +33,9 @@ class SvgPainter final : public Painter {
     cairo_surface_destroy(s);
     check_cairo(st, "SVG drawing");
     check_cairo(st2, "SVG file");
+    const std::string bytes = renumber_svg_ids(std::move(buffer).str());
+    out_.write(bytes.data(), static_cast<std::streamsize>(bytes.size()));
+    if (!out_) throw std::runtime_error("SVG file: write failed");
   }
   void finish() override {}
 

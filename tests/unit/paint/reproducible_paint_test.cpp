@@ -1,0 +1,101 @@
+// Painting the same display list twice, in one process, gives the same bytes
+// in every format once the document date is fixed. One process is the hard
+// case: Cairo numbers some SVG ids from a process-wide counter. The PDF date
+// form is ISO 32000-1 §7.9.4.
+#include <catch2/catch.hpp>
+#include <algorithm>
+#include <ctime>
+#include <sstream>
+#include <string>
+#include <vector>
+
+#include "cli/render_job.h"
+#include "paint/painter.h"
+#include "paint/pdf_dates.h"
+#include "paint/svg_ids.h"
+#include "text/font.h"
+
+namespace {
+
+forme::DisplayPage demo_page() {
+  forme::DiagnosticSink sink;
+  return forme::compose_page(std::string(FORME_SOURCE_DIR) + "/layouts/reservoirs/page.yaml",
+                             forme::find_font_dir(FORME_BINARY), sink);
+}
+
+std::string paint(const forme::DisplayPage& page, forme::OutputFormat format, std::optional<std::int64_t> when) {
+  std::ostringstream out;
+  forme::PaintOptions po;
+  po.dpi = 72;
+  po.info.title = page.title;
+  po.info.creation_time = when;
+  auto painter = forme::make_painter(format, out, po);
+  painter->paint(page);
+  painter->finish();
+  return std::move(out).str();
+}
+
+}  // namespace
+
+TEST_CASE("PDF, SVG and PNG bytes repeat exactly within one process", "[paint][reproducible]") {
+  const forme::DisplayPage page = demo_page();
+  for (auto format : {forme::OutputFormat::pdf, forme::OutputFormat::svg, forme::OutputFormat::png}) {
+    INFO("format " << static_cast<int>(format));
+    const std::string a = paint(page, format, 1709208000);
+    const std::string b = paint(page, format, 1709208000);
+    REQUIRE(a.size() > 1000);
+    CHECK(a == b);
+  }
+}
+
+TEST_CASE("the PDF carries the stated creation date with the D: prefix", "[paint][reproducible]") {
+  const std::string pdf = paint(demo_page(), forme::OutputFormat::pdf, 1709208000);
+  // 1709208000 s after the epoch is 2024-02-29 12:00:00 UTC: 19782 days
+  // (1970..2023, 13 of them leap years: 54 × 365 + 13) + 59 days + 12 h.
+  REQUIRE(1709208000 == (54LL * 365 + 13 + 59) * 86400 + 12 * 3600);
+  CHECK(pdf.find("/CreationDate (D:20240229120000Z)") != std::string::npos);
+}
+
+TEST_CASE("without a stated date the PDF is dated at the time of painting", "[paint][reproducible]") {
+  const forme::DisplayPage page = demo_page();
+  const std::int64_t before = std::time(nullptr);
+  const std::string pdf = paint(page, forme::OutputFormat::pdf, std::nullopt);
+  const std::int64_t after = std::time(nullptr);
+  const std::size_t at = pdf.find("/CreationDate (");
+  REQUIRE(at != std::string::npos);
+  const std::string date = pdf.substr(at + 15, 17);
+  // The string sorts like the instant it names, so the painted date lies
+  // between the two clock readings.
+  CHECK(date >= forme::pdf_date_utc(before));
+  CHECK(date <= forme::pdf_date_utc(after));
+}
+
+TEST_CASE("SVG surface and image ids are renumbered by first appearance", "[paint][svg]") {
+  const std::string in =
+      "<defs><g id=\"surface17\"/><image id=\"image40\"/></defs>"
+      "<g id=\"surface9\"><use xlink:href=\"#surface17\"/><rect style=\"fill:url(#image40)\"/></g>"
+      "<g id=\"glyph0-3\"/><g id=\"surface9x\"/><g id=\"clip5\"/>";
+  const std::string want =
+      "<defs><g id=\"surface1\"/><image id=\"image1\"/></defs>"
+      "<g id=\"surface2\"><use xlink:href=\"#surface1\"/><rect style=\"fill:url(#image1)\"/></g>"
+      "<g id=\"glyph0-3\"/><g id=\"surface9x\"/><g id=\"clip5\"/>";
+  CHECK(forme::renumber_svg_ids(in) == want);
+}
+
+TEST_CASE("every SVG id reference still names an element after renumbering", "[paint][svg]") {
+  const std::string svg = paint(demo_page(), forme::OutputFormat::svg, std::nullopt);
+  // Collect ids and check each "#name" reference (href or url()) against them.
+  std::vector<std::string> ids, refs;
+  for (std::size_t p = svg.find("id=\""); p != std::string::npos; p = svg.find("id=\"", p + 1))
+    ids.push_back(svg.substr(p + 4, svg.find('"', p + 4) - p - 4));
+  for (std::size_t p = svg.find("href=\"#"); p != std::string::npos; p = svg.find("href=\"#", p + 1))
+    refs.push_back(svg.substr(p + 7, svg.find('"', p + 7) - p - 7));
+  for (std::size_t p = svg.find("url(#"); p != std::string::npos; p = svg.find("url(#", p + 1))
+    refs.push_back(svg.substr(p + 5, svg.find(')', p + 5) - p - 5));
+  REQUIRE(!refs.empty());
+  CHECK(std::find(ids.begin(), ids.end(), "surface1") != ids.end());
+  for (const auto& r : refs) {
+    INFO(r);
+    CHECK(std::find(ids.begin(), ids.end(), r) != ids.end());
+  }
+}
