@@ -17,6 +17,7 @@
 #include "layout/layout_page.h"
 #include "layout/page_style.h"
 #include "paint/atomic_file.h"
+#include "paint/pdf_dates.h"
 #include "series/select_series.h"
 
 namespace forme {
@@ -98,6 +99,8 @@ std::string render_to_bytes(const std::string& page_path, OutputFormat format, c
   PaintOptions po;
   po.dpi = dpi;
   po.info.title = page.title;
+  // Reproducible output: a build may pin the document date (reproducible-builds.org SOURCE_DATE_EPOCH).
+  po.info.creation_time = parse_source_date_epoch(std::getenv("SOURCE_DATE_EPOCH"));
   auto painter = make_painter(format, out, po);                     // 7. paint
   painter->paint(page);
   painter->finish();
