@@ -7,6 +7,7 @@
 #include <string>
 #include <vector>
 
+#include "base/diagnostic.h"
 #include "scale/number_format.h"
 #include "series/panel_data.h"
 
@@ -35,10 +36,11 @@ struct PanelAxes {
 };
 
 /// One PanelAxes per panel. Panels showing the same columns share domains
-/// and ticks unless the grid frees a direction. Throws InputError for
-/// ranges that would mislead (bars not starting at zero, log scales over
-/// data that are not all positive).
-std::vector<PanelAxes> resolve_axes(const std::vector<PanelData>& panels, const GridSpec& grid);
+/// and ticks unless the grid frees a direction. Ranges that would mislead
+/// (bars not starting at zero, log scales over data that are not all
+/// positive) are reported as errors in `sink`, and the axis is built the
+/// honest way instead so that later checks still run.
+std::vector<PanelAxes> resolve_axes(const std::vector<PanelData>& panels, const GridSpec& grid, DiagnosticSink& sink);
 
 /// Smallest distance between neighbouring x values in any series (1 when
 /// no series has two distinct values): the width of one period on a time axis.

@@ -145,7 +145,7 @@ Axis category_axis(const std::vector<std::string>& cats) {
 }
 
 // Builds one axis (x or y) over a set of panels that share it.
-Axis build_axis(const std::vector<const PanelData*>& panels, bool is_x) {
+Axis build_axis(const std::vector<const PanelData*>& panels, bool is_x, DiagnosticSink& sink) {
   const PanelData& first = *panels.front();
   const PanelSpec& spec = *first.spec;
   const AxisSpec& as = is_x ? spec.x_axis : spec.y_axis;
@@ -167,31 +167,38 @@ Axis build_axis(const std::vector<const PanelData*>& panels, bool is_x) {
     for (const auto& r : p->spec->references)
       if (!is_x && r.y) e.add(*r.y);
   }
+  // Refusals are reported and the axis carries on honestly (from zero,
+  // linear), so one check run lists every problem on the page.
   if (!as.min.empty()) {
     const double v = author_value(as.min, kind);
     if (from_zero && v > 0)
-      throw InputError(as.min.loc, "bars must start at zero, so the axis cannot begin at " + as.min.value,
-                       "a bar's length stands for its value; a cut axis makes small differences look large. "
-                       "Use a line or dot panel to show values far from zero");
-    e.add(v);
+      sink.report({Severity::error, as.min.loc, "bars must start at zero, so the axis cannot begin at " + as.min.value,
+                   "a bar's length stands for its value; a cut axis makes small differences look large. "
+                   "Use a line or dot panel to show values far from zero"});
+    else
+      e.add(v);
   }
   if (!as.max.empty()) {
     const double v = author_value(as.max, kind);
     if (from_zero && v < 0)
-      throw InputError(as.max.loc, "bars must reach zero, so the axis cannot end at " + as.max.value,
-                       "a bar's length stands for its value; use a line or dot panel instead");
-    e.add(v);
+      sink.report({Severity::error, as.max.loc, "bars must reach zero, so the axis cannot end at " + as.max.value,
+                   "a bar's length stands for its value; use a line or dot panel instead"});
+    else
+      e.add(v);
   }
   Axis a;
   if (kind == AxisKind::date) {
     a = date_axis(e, first.x_dates, bars(first.kind) ? smallest_step(panels) / 2 : 0);
+  } else if (as.log && from_zero) {
+    sink.report({Severity::error, as.scale_loc, "bars cannot stand on a logarithmic scale, which has no zero",
+                 "use a dot or line panel for a log scale"});
+    a = number_axis(e, from_zero, as);
+  } else if (as.log && (e.empty() || e.lo <= 0)) {
+    sink.report({Severity::error, as.scale_loc,
+                 "a logarithmic scale needs strictly positive data, and this axis has values ≤ 0",
+                 "use a linear scale, or transform the data first"});
+    a = number_axis(e, from_zero, as);
   } else if (as.log) {
-    if (from_zero)
-      throw InputError(as.scale_loc, "bars cannot stand on a logarithmic scale, which has no zero",
-                       "use a dot or line panel for a log scale");
-    if (e.empty() || e.lo <= 0)
-      throw InputError(as.scale_loc, "a logarithmic scale needs strictly positive data, and this axis has values ≤ 0",
-                       "use a linear scale, or transform the data first");
     a = log_axis(e, as);
   } else {
     a = number_axis(e, from_zero, as);
@@ -203,7 +210,7 @@ Axis build_axis(const std::vector<const PanelData*>& panels, bool is_x) {
 
 }  // namespace
 
-std::vector<PanelAxes> resolve_axes(const std::vector<PanelData>& panels, const GridSpec& grid) {
+std::vector<PanelAxes> resolve_axes(const std::vector<PanelData>& panels, const GridSpec& grid, DiagnosticSink& sink) {
   // Panels share a scale when they show the same columns with the same
   // chart kind; a page mixing, say, a line and a bar panel has two scales.
   auto key = [](const PanelData& p) {
@@ -222,13 +229,14 @@ std::vector<PanelAxes> resolve_axes(const std::vector<PanelData>& panels, const 
         members.push_back(j);
         done[j] = true;
       }
-    const Axis shared_x = build_axis(group, true), shared_y = build_axis(group, false);
+    const Axis shared_x = build_axis(group, true, sink), shared_y = build_axis(group, false, sink);
     for (std::size_t j : members) {
       std::vector<const PanelData*> one{&panels[j]};
       const bool own_x = grid.free_x && group.size() > 1 && panels[j].x_kind != AxisKind::category;
       const bool own_y = grid.free_y && group.size() > 1 && panels[j].y_kind != AxisKind::category;
-      out[j].x = own_x ? build_axis(one, true) : shared_x;
-      out[j].y = own_y ? build_axis(one, false) : shared_y;
+      DiagnosticSink repeat;  // a panel's own axis repeats what the shared one reported
+      out[j].x = own_x ? build_axis(one, true, repeat) : shared_x;
+      out[j].y = own_y ? build_axis(one, false, repeat) : shared_y;
       out[j].x.own_scale = own_x;
       out[j].y.own_scale = own_y;
       // Explicit panel lists may title their axes differently.

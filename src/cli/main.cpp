@@ -1,11 +1,13 @@
 // forme's command line: parse arguments, call the driver, print diagnostics.
-// Exit codes: 0 success, 1 input or data error, 2 usage error.
+// Exit codes: 0 success, 1 input or data error (or, for check, findings that
+// fail), 2 usage error.
 #include <CLI/CLI.hpp>
 
 #include <filesystem>
 #include <iostream>
 
 #include "base/diagnostic.h"
+#include "cli/colour_commands.h"
 #include "cli/render_job.h"
 #include "cli/signal_cleanup.h"
 #include "paint/painter.h"
@@ -16,13 +18,47 @@ namespace {
 constexpr int kExitInput = 1;
 constexpr int kExitUsage = 2;
 
-int print_diagnostics(const std::vector<forme::Diagnostic>& ds) {
+bool print_diagnostics(const std::vector<forme::Diagnostic>& ds) {
   bool error = false;
   for (const auto& d : ds) {
     std::cerr << forme::format_diagnostic(d) << '\n';
     error |= d.severity == forme::Severity::error;
   }
-  return error ? kExitInput : 0;
+  return error;
+}
+
+bool has_warnings(const std::vector<forme::Diagnostic>& ds) {
+  for (const auto& d : ds)
+    if (d.severity == forme::Severity::warning) return true;
+  return false;
+}
+
+int render(forme::RenderOptions& options, const char* argv0) {
+  // A wrong output name is a mistake on the command line, not in the page.
+  if (!forme::format_for_path(options.output_path)) {
+    std::cerr << options.output_path << ": error: unknown output type\n  hint: name the output .pdf, .svg or .png\n";
+    return kExitUsage;
+  }
+  std::error_code ec;
+  if (std::filesystem::equivalent(options.output_path, options.page_path, ec)) {
+    std::cerr << options.output_path << ": error: output would overwrite the page description\n"
+              << "  hint: name a different output file\n";
+    return kExitUsage;
+  }
+  forme::install_signal_cleanup();
+  options.font_dir = forme::find_font_dir(argv0);
+  forme::RenderResult r = forme::render_file(options);
+  print_diagnostics(r.diagnostics);
+  return r.ok ? 0 : kExitInput;
+}
+
+int check(const std::string& page, bool strict, const char* argv0) {
+  forme::RenderResult r = forme::check_file(page, forme::find_font_dir(argv0));
+  const bool errors = print_diagnostics(r.diagnostics);
+  if (errors || !r.ok) return kExitInput;
+  if (strict && has_warnings(r.diagnostics)) return kExitInput;
+  if (r.diagnostics.empty()) std::cerr << page << ": no findings\n";
+  return 0;
 }
 
 }  // namespace
@@ -38,18 +74,41 @@ int main(int argc, char** argv) {
     return "forme: error: " + std::string(e.what()) + "\n  hint: run '" + name + " --help'\n";
   };
   app.failure_message(usage_message);
-  // CLI11 reports an unknown command as "A subcommand is required".
-  if (argc > 1 && argv[1][0] != '-' && std::string(argv[1]) != "render") {
-    std::cerr << "forme: error: unknown command '" << argv[1] << "'\n  hint: the command is 'render'\n";
-    return kExitUsage;
-  }
 
-  forme::RenderOptions render;
-  auto* cmd = app.add_subcommand("render", "Render a page description to PDF, SVG or PNG.");
-  cmd->failure_message(usage_message);
-  cmd->add_option("page", render.page_path, "page description (YAML)")->required();
-  cmd->add_option("-o,--output", render.output_path, "output file: .pdf, .svg or .png")->required();
-  cmd->add_option("--dpi", render.dpi, "resolution of PNG output")->check(CLI::Range(10.0, 2400.0));
+  forme::RenderOptions render_options;
+  auto* render_cmd = app.add_subcommand("render", "Render a page description to PDF, SVG or PNG.");
+  render_cmd->add_option("page", render_options.page_path, "page description (YAML)")->required();
+  render_cmd->add_option("-o,--output", render_options.output_path, "output file: .pdf, .svg or .png")->required();
+  render_cmd->add_option("--dpi", render_options.dpi, "resolution of PNG output")->check(CLI::Range(10.0, 2400.0));
+
+  std::string check_page;
+  bool strict = false;
+  auto* check_cmd = app.add_subcommand(
+      "check", "Read a page, resolve its data and scales without painting, and list what could mislead.");
+  check_cmd->add_option("page", check_page, "page description (YAML)")->required();
+  check_cmd->add_flag("--strict", strict, "treat warnings as failures (exit 1)");
+
+  std::string fg, bg;
+  auto* contrast_cmd = app.add_subcommand("contrast", "Print the WCAG 2.x contrast ratio of two colours.");
+  contrast_cmd->add_option("foreground", fg, "#rgb, #rrggbb, oklch(L C H) or a palette entry such as estuary.2")->required();
+  contrast_cmd->add_option("background", bg, "the colour behind it")->required();
+
+  std::string palette_name;
+  auto* palette_cmd = app.add_subcommand("palette", "Show a palette with its distances under simulated colour vision.");
+  palette_cmd->add_option("name", palette_name, "palette name")->required();
+
+  for (auto* sub : app.get_subcommands({})) sub->failure_message(usage_message);
+
+  // CLI11 reports an unknown command as "A subcommand is required".
+  if (argc > 1 && argv[1][0] != '-') {
+    bool known = false;
+    for (auto* sub : app.get_subcommands({})) known |= sub->get_name() == argv[1];
+    if (!known) {
+      std::cerr << "forme: error: unknown command '" << argv[1]
+                << "'\n  hint: the commands are render, check, contrast and palette\n";
+      return kExitUsage;
+    }
+  }
 
   try {
     app.parse(argc, argv);
@@ -64,24 +123,9 @@ int main(int argc, char** argv) {
     return kExitUsage;
   }
 
-  if (*cmd) {
-    // A wrong output name is a mistake on the command line, not in the page.
-    if (!forme::format_for_path(render.output_path)) {
-      std::cerr << render.output_path << ": error: unknown output type\n  hint: name the output .pdf, .svg or .png\n";
-      return kExitUsage;
-    }
-    std::error_code ec;
-    if (std::filesystem::equivalent(render.output_path, render.page_path, ec)) {
-      std::cerr << render.output_path << ": error: output would overwrite the page description\n"
-                << "  hint: name a different output file\n";
-      return kExitUsage;
-    }
-    forme::install_signal_cleanup();
-    render.font_dir = forme::find_font_dir(argv[0]);
-    forme::RenderResult r = forme::render_file(render);
-    int code = print_diagnostics(r.diagnostics);
-    (void)code;
-    return r.ok ? 0 : kExitInput;
-  }
+  if (*render_cmd) return render(render_options, argv[0]);
+  if (*check_cmd) return check(check_page, strict, argv[0]);
+  if (*contrast_cmd) return forme::run_contrast(fg, bg, std::cout, std::cerr);
+  if (*palette_cmd) return forme::run_palette(palette_name, std::cout, std::cerr);
   return kExitUsage;
 }

@@ -9,6 +9,7 @@
 #include <optional>
 #include <sstream>
 
+#include "audit/page_audit.h"
 #include "axes/axis.h"
 #include "cli/signal_cleanup.h"
 #include "colour/palette.h"
@@ -87,9 +88,14 @@ DisplayPage compose_page(const std::string& page_path, const std::string& font_d
   }
   std::vector<Table> tables = load_tables(*spec, limits);                   // 2. load data
   std::vector<PanelData> panels = select_series(*spec, tables, sink);
-  std::vector<PanelAxes> axes = resolve_axes(panels, spec->grid);   // 3. resolve scales
+  std::vector<PanelAxes> axes = resolve_axes(panels, spec->grid, sink); // 3. resolve scales
+  audit_page(*spec, panels, axes, sink);
   PageStyle style = style_for(*spec, font_dir);                     // 4. measure text (fonts)
-  return layout_page(*spec, panels, axes, style, sink);             // 5-6. lay out, place labels
+  DisplayPage page = layout_page(*spec, panels, axes, style, sink); // 5-6. lay out, place labels
+  audit_layout(*spec, page, sink);
+  for (const auto& d : sink.items())
+    if (d.severity == Severity::error) throw InputError(d);  // reported already; stops the write
+  return page;
 }
 
 std::string render_to_bytes(const std::string& page_path, OutputFormat format, const std::string& font_dir,
@@ -107,10 +113,38 @@ std::string render_to_bytes(const std::string& page_path, OutputFormat format, c
   return std::move(out).str();
 }
 
+namespace {
+
+// Runs `work`, turning every failure into a diagnostic in `sink`: the one
+// place where errors become values for the command line.
+template <class Work>
+bool collect(DiagnosticSink& sink, const std::string& page_path, Work&& work) {
+  try {
+    work();
+    return true;
+  } catch (const InputError& e) {
+    if (!sink.has_errors()) sink.report(e.diagnostic());
+  } catch (const std::exception& e) {
+    sink.report({Severity::error, SourceLoc{page_path}, std::string("internal error: ") + e.what(),
+                 "this is a bug in forme; please report it with the page description"});
+  }
+  return false;
+}
+
+}  // namespace
+
+RenderResult check_file(const std::string& page_path, const std::string& font_dir, const Limits& limits) {
+  RenderResult r;
+  DiagnosticSink sink;
+  r.ok = collect(sink, page_path, [&] { compose_page(page_path, font_dir, sink, limits); });
+  r.diagnostics = sink.items();
+  return r;
+}
+
 RenderResult render_file(const RenderOptions& o) {
   RenderResult r;
   DiagnosticSink sink;
-  try {
+  r.ok = collect(sink, o.page_path, [&] {
     auto format = format_for_path(o.output_path);
     if (!format)
       throw InputError(SourceLoc{o.output_path}, "unknown output type", "name the output .pdf, .svg or .png");
@@ -128,13 +162,7 @@ RenderResult render_file(const RenderOptions& o) {
     file->write(bytes);
     pause_for_tests();
     file->commit();
-    r.ok = true;
-  } catch (const InputError& e) {
-    if (sink.items().empty() || !sink.has_errors()) sink.report(e.diagnostic());
-  } catch (const std::exception& e) {
-    sink.report({Severity::error, SourceLoc{o.page_path}, std::string("internal error: ") + e.what(),
-                 "this is a bug in forme; please report it with the page description"});
-  }
+  });
   r.diagnostics = sink.items();
   return r;
 }

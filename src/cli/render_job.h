@@ -35,6 +35,10 @@ struct RenderResult {
 /// interrupt it at that moment. It is not part of the user interface.
 RenderResult render_file(const RenderOptions& options);
 
+/// Runs every stage up to painting and reports every finding (errors and
+/// warnings) without writing anything: `forme check`.
+RenderResult check_file(const std::string& page_path, const std::string& font_dir, const Limits& limits = {});
+
 /// Runs every stage up to painting: the laid-out page (tests read its text
 /// positions). Throws InputError.
 DisplayPage compose_page(const std::string& page_path, const std::string& font_dir, DiagnosticSink& warnings,

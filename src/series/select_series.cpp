@@ -189,9 +189,11 @@ std::vector<PanelData> select_series(const PageSpec& page, const std::vector<Tab
     }
   }
   share_categories(out);
-  for (const auto& d : out) {
+  for (std::size_t i = 0; i < out.size(); ++i) {
+    const PanelData& d = out[i];
+    const std::string name = d.title.empty() ? "panel " + std::to_string(i + 1) : "panel '" + d.title + "'";
     if (d.rows_used == 0)
-      warnings.warn(d.spec->loc, "panel '" + d.title + "' has no data to show",
+      warnings.warn(d.spec->loc, name + " has no data to show",
                     "check its 'where' filter and the table's contents");
   }
   if (out.empty()) throw InputError(page.grid.one_panel_per.loc, "no panels: the table has no rows to split");
