@@ -51,10 +51,6 @@ class Validator {
   }
 
   void node(const YAML::Node& n, const NodeSpec& spec, const std::string& path) {
-    if (!spec.refused.empty()) {
-      error(n, "'" + path + "' is not available", std::string(spec.refused));
-      return;
-    }
     if (n.IsScalar() && spec.scalar_ok) return scalar(n, spec, path);
     if (n.IsMap() && (spec.map_ok)) return mapping(n, spec, path);
     if (n.IsSequence() && spec.list_ok) {
@@ -98,7 +94,7 @@ class Validator {
   void mapping(const YAML::Node& n, const NodeSpec& spec, const std::string& path) {
     std::map<std::string, int> seen;  // key -> line of its first use
     for (auto it = n.begin(); it != n.end(); ++it) {
-      const YAML::Node& k = it->first;
+      const YAML::Node k = it->first;  // a copy: it->first dies with the proxy it-> returns
       if (!k.IsScalar()) {
         error(k, "keys of " + (path.empty() ? std::string("the page description") : "'" + path + "'") +
                      " must be plain words");
