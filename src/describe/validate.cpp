@@ -51,6 +51,10 @@ class Validator {
   }
 
   void node(const YAML::Node& n, const NodeSpec& spec, const std::string& path) {
+    if (!spec.refused.empty()) {
+      error(n, "'" + path + "' is not available", std::string(spec.refused));
+      return;
+    }
     if (n.IsScalar() && spec.scalar_ok) return scalar(n, spec, path);
     if (n.IsMap() && (spec.map_ok)) return mapping(n, spec, path);
     if (n.IsSequence() && spec.list_ok) {
