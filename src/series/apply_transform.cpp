@@ -116,7 +116,7 @@ TransformStatement apply_transform(const TransformSpec& t, PanelData& p) {
       p.series = std::move(out);
       said.axis_title = "Difference from " + t.minus.value;
       said.keeps_unit = true;
-      said.sentence = "Values are differences from " + t.minus.value + ".";
+      said.sentence = "Differences are each series minus " + t.minus.value + ".";
       break;
     }
     case Kind::share: {
