@@ -4,8 +4,9 @@ function(forme_set_warnings target)
     -Wnon-virtual-dtor -Wold-style-cast -Wcast-align -Wunused -Woverloaded-virtual
 -Wdouble-promotion -Wformat=2 -Wimplicit-fallthrough
     # GCC 12 reports false dangling pointers inside yaml-cpp 0.7 headers and
-    # false "maybe uninitialized" optionals inside std::variant.
-    $<$<CXX_COMPILER_ID:GNU>:-Wno-dangling-pointer -Wno-maybe-uninitialized>)
+    # false "maybe uninitialized" optionals inside std::variant, and false
+    # -Wrestrict reports from std::string at -O3.
+    $<$<CXX_COMPILER_ID:GNU>:-Wno-dangling-pointer -Wno-maybe-uninitialized -Wno-restrict>)
   if(FORME_WERROR)
     target_compile_options(${target} PRIVATE -Werror)
   endif()

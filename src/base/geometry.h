@@ -37,6 +37,26 @@ struct Rect {
   }
 };
 
+/// True when the segment a–b passes through (or touches) the rectangle:
+/// Liang–Barsky clipping of the segment against the four edges.
+inline bool segment_meets_rect(Point a, Point b, const Rect& r) {
+  double t0 = 0, t1 = 1;
+  const double dx = b.x - a.x, dy = b.y - a.y;
+  const double p[4] = {-dx, dx, -dy, dy};
+  const double q[4] = {a.x - r.left(), r.right() - a.x, a.y - r.top(), r.bottom() - a.y};
+  for (int i = 0; i < 4; ++i) {
+    if (p[i] == 0) {
+      if (q[i] < 0) return false;  // parallel to this edge and outside it
+      continue;
+    }
+    const double t = q[i] / p[i];
+    if (p[i] < 0) t0 = std::max(t0, t);
+    else t1 = std::min(t1, t);
+    if (t0 > t1) return false;
+  }
+  return true;
+}
+
 /// Points per unit: the PDF user unit is 1/72 inch (ISO 32000-1 §8.3.2.3).
 inline constexpr double kPointsPerInch = 72.0;
 inline constexpr double kMillimetresPerInch = 25.4;

@@ -18,12 +18,17 @@ namespace {
 constexpr int kExitInput = 1;
 constexpr int kExitUsage = 2;
 
+// Errors first (the first line says why nothing was written), then
+// warnings and notes, each group in the order found.
 bool print_diagnostics(const std::vector<forme::Diagnostic>& ds) {
   bool error = false;
-  for (const auto& d : ds) {
-    std::cerr << forme::format_diagnostic(d) << '\n';
-    error |= d.severity == forme::Severity::error;
-  }
+  for (const auto& d : ds)
+    if (d.severity == forme::Severity::error) {
+      std::cerr << forme::format_diagnostic(d) << '\n';
+      error = true;
+    }
+  for (const auto& d : ds)
+    if (d.severity != forme::Severity::error) std::cerr << forme::format_diagnostic(d) << '\n';
   return error;
 }
 

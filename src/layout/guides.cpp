@@ -40,15 +40,6 @@ double reference_x(const ReferenceLine& r, const Axis& x) {
   throw InputError(r.x.loc, "'" + r.x.value + "' is not a number");
 }
 
-bool segment_hits(const Rect& r, Point a, Point b) {
-  // Sample the segment finely; labels are many times larger than the step.
-  for (int i = 0; i <= 64; ++i) {
-    const double t = i / 64.0;
-    if (r.contains({a.x + (b.x - a.x) * t, a.y + (b.y - a.y) * t})) return true;
-  }
-  return false;
-}
-
 // The equation goes in a corner of the plot that no dot and no trend line
 // crosses: the corners off the line's diagonal first.
 Rect equation_box(const MarkContext& ctx, const ShapedText& t, const LinearFit& fit, const std::vector<Point>& line) {
@@ -62,7 +53,7 @@ Rect equation_box(const MarkContext& ctx, const ShapedText& t, const LinearFit& 
   const std::vector<Rect> order = fit.slope >= 0 ? std::vector<Rect>{tl, br, tr, bl} : std::vector<Rect>{tr, bl, tl, br};
   const double r = ctx.style.dot_radius() * 1.2;
   for (const Rect& c : order) {
-    bool clear = !segment_hits(c.inflate(pad / 2), line[0], line[1]);
+    bool clear = !segment_meets_rect(line[0], line[1], c.inflate(pad / 2));
     for (const auto& s : ctx.data.series)
       for (std::size_t i = 0; i < s.x.size() && clear; ++i)
         clear = !Rect{f.px(s.x[i]) - r, f.py(s.y[i]) - r, 2 * r, 2 * r}.overlaps(c.inflate(pad / 2));

@@ -33,7 +33,7 @@ TEST_CASE("forme check is silent on every layout page, even with --strict", "[ou
   }
 }
 
-TEST_CASE("--strict turns warnings into a failing exit code; render prints the same warnings", "[outside][check]") {
+TEST_CASE("the strict flag turns warnings into a failing exit code, and render prints the same warnings", "[outside][check]") {
   TempDir dir;
   write_file(dir.file("t.csv"), "x,y\n1,2\n2,3\n");
   write_file(dir.file("page.yaml"), "tables: {t: t.csv}\npanel: {kind: line, table: t, x: x, y: y}\n");

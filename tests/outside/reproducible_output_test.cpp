@@ -62,7 +62,7 @@ TEST_CASE("two runs with SOURCE_DATE_EPOCH write identical PDF, SVG and PNG byte
   }
 }
 
-TEST_CASE("pdfinfo reads the SOURCE_DATE_EPOCH instant as the creation date; qpdf finds the file sound",
+TEST_CASE("pdfinfo reads the SOURCE_DATE_EPOCH instant as the creation date, and qpdf finds the file sound",
           "[outside][reproducible]") {
   REQUIRE(have_tool("pdfinfo"));
   REQUIRE(have_tool("qpdf"));

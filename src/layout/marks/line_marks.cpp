@@ -3,41 +3,91 @@
 // and a short leader joins a name that had to move to its line's end.
 #include <cmath>
 
+#include "colour/text_ink.h"
 #include "layout/marks/marks.h"
 #include "layout/text_items.h"
 #include "place/spread.h"
+#include "simplify/polyline.h"
 
 namespace forme {
+
+namespace {
+
+// A label just after a line's last point, if no line passes through it.
+bool free_of_lines(const Rect& r, const std::vector<std::vector<Point>>& lines) {
+  for (const auto& l : lines)
+    for (std::size_t i = 1; i < l.size(); ++i)
+      if (segment_meets_rect(l[i - 1], l[i], r)) return false;
+  return true;
+}
+
+}  // namespace
 
 void draw_line_marks(const MarkContext& ctx, DisplayPage& page) {
   const PlotFrame& f = ctx.frame;
   const PageStyle& st = ctx.style;
   struct End {
-    double y;
+    Point at;
     Rgb colour;
     const std::string* name;
   };
   std::vector<End> ends;
+  std::vector<std::vector<Point>> drawn;
   for (const auto& s : ctx.data.series) {
     const Rgb colour = ctx.colours.at(s.name);
     PathItem path;
     path.stroke = Stroke{colour, st.line_width(), {}, true};
     for (std::size_t i = 0; i < s.x.size(); ++i) path.points.push_back({f.px(s.x[i]), f.py(s.y[i])});
+    // Thin long series to what print can show: no drawn point moves by
+    // more than 0.05 pt, far below what an eye resolves on paper.
+    path.points = simplify_polyline(path.points, 0.05);
+    drawn.push_back(path.points);
     if (path.points.size() == 1) {
       page.add(CircleItem{path.points[0], st.dot_radius(), colour, std::nullopt});
     } else if (!path.points.empty()) {
       page.add(std::move(path));
     }
-    if (!s.x.empty() && !s.name.empty()) ends.push_back({f.py(s.y.back()), colour, &s.name});
+    if (!s.x.empty() && !s.name.empty()) ends.push_back({{f.px(s.x.back()), f.py(s.y.back())}, colour, &s.name});
   }
   if (!ctx.label_series || ends.empty()) return;
 
+  // A line that stops early (a year still running) is named where it
+  // stops, when that spot is clear of every line; the rest are named in
+  // the margin beside the plot.
+  const double lh = PageStyle::line_height(st.fonts.regular, st.label_size());
+  std::vector<End> margin;
+  std::vector<Rect> placed_early;
+  for (const auto& e : ends) {
+    if (e.at.x < f.plot.right() - st.base * 0.5) {
+      ShapedText t = shape_text(*e.name, st.fonts.regular, st.label_size());
+      const double pad = st.base * 0.5;
+      // Right of the end, then above it, then below it.
+      const Rect candidates[] = {{e.at.x + pad, e.at.y - lh / 2, t.width, lh},
+                                 {e.at.x - t.width / 2, e.at.y - pad - lh, t.width, lh},
+                                 {e.at.x - t.width / 2, e.at.y + pad, t.width, lh}};
+      bool done = false;
+      for (const Rect& box : candidates) {
+        bool clear = box.left() >= f.plot.left() && box.right() <= f.plot.right() && box.top() >= f.plot.top() &&
+                     box.bottom() <= f.plot.bottom() && free_of_lines(box.inflate(st.base * 0.15), drawn);
+        for (const Rect& other : placed_early) clear = clear && !other.overlaps(box);
+        if (!clear) continue;
+        placed_early.push_back(box);
+        page.add(text_mid(std::move(t), box.x, box.cy(), Align::left, text_ink(e.colour, st.ink.paper), TextRole::series_label));
+        done = true;
+        break;
+      }
+      if (done) continue;
+    }
+    margin.push_back(e);
+  }
+  ends = std::move(margin);
+  if (ends.empty()) return;
   std::vector<ShapedText> texts;
   std::vector<double> desired, heights;
   for (const auto& e : ends) {
     texts.push_back(shape_text(*e.name, st.fonts.regular, st.label_size()));
-    desired.push_back(e.y);
-    heights.push_back(PageStyle::line_height(st.fonts.regular, st.label_size()));
+    desired.push_back(e.at.y);
+    heights.push_back(lh);
   }
   SpreadOptions opt;
   opt.gap = st.base * 0.15;
@@ -48,13 +98,14 @@ void draw_line_marks(const MarkContext& ctx, DisplayPage& page) {
   const double label_x = f.plot.right() + st.base * 0.9;
   for (std::size_t i = 0; i < ends.size(); ++i) {
     const double y = placed.centres[i];
-    if (std::abs(y - ends[i].y) > st.base * 0.25) {
+    if (std::abs(y - ends[i].at.y) > st.base * 0.25) {
       PathItem leader;
-      leader.points = {{x0, ends[i].y}, {label_x - st.base * 0.2, y}};
+      leader.points = {{x0, ends[i].at.y}, {label_x - st.base * 0.2, y}};
       leader.stroke = Stroke{ends[i].colour, st.rule_width() * 1.5, {}, true};
       page.add(std::move(leader));
     }
-    page.add(text_mid(std::move(texts[i]), label_x, y, Align::left, ends[i].colour, TextRole::series_label));
+    page.add(text_mid(std::move(texts[i]), label_x, y, Align::left, text_ink(ends[i].colour, st.ink.paper),
+                      TextRole::series_label));
   }
 }
 

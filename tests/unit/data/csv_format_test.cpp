@@ -49,7 +49,7 @@ TEST_CASE("RFC 4180 rule 3: the header line names the fields", "[data][csv]") {
   CHECK(t.columns[2].header_col == 17);
 }
 
-TEST_CASE("RFC 4180 rule 4: spaces are part of a field; header names are trimmed", "[data][csv]") {
+TEST_CASE("RFC 4180 rule 4: spaces are part of a field, but header names are trimmed", "[data][csv]") {
   // Rule 4 says spaces are part of the field: cell text keeps them. forme
   // deliberately trims header names so "a, b" names a column "b".
   const Table t = parse_csv("a, b\naaa, bbb \n", "t.csv");
@@ -121,7 +121,7 @@ TEST_CASE("a UTF-8 byte-order mark is stripped", "[data][csv]") {
   CHECK(forme::test::csv_error("\xEF\xBB\xBF") == "t.csv: error: table has no header row");
 }
 
-TEST_CASE("blank lines are skipped; empty fields are empty cells", "[data][csv]") {
+TEST_CASE("blank lines are skipped, and empty fields are empty cells", "[data][csv]") {
   const Table t = parse_csv("\n\na,b,c\n\n1,,3\n\r\n,2,\n\n\n", "t.csv");
   REQUIRE(t.rows == 2);
   CHECK(t.row_lines == std::vector<int>{5, 7});

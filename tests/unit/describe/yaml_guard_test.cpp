@@ -81,7 +81,7 @@ TEST_CASE("nesting deeper than the limit is refused where it crosses the limit",
   CHECK(error_of("a: \"[[[[[[\"\nb: '{{{{{{'  # [[[[[[\nc: |\n  [[[[[[\n      [[[[\n", l).empty());
 }
 
-TEST_CASE("ten thousand '[' are refused without exhausting the stack", "[describe][guard]") {
+TEST_CASE("ten thousand open brackets are refused without exhausting the stack", "[describe][guard]") {
   std::string e = error_of("notes: " + std::string(10000, '[') + "\n");
   CHECK(first_line(e) == "page.yaml:1:71: error: nesting deeper than 64 levels");
   // The same with no mapping around it, in flow and in block form.

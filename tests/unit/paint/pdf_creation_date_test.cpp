@@ -85,7 +85,7 @@ TEST_CASE("a missing creation date is added to the information dictionary", "[pa
   check_structure(after);
 }
 
-TEST_CASE("a shorter date moves offsets backwards; a string with nested parentheses is replaced whole",
+TEST_CASE("a shorter date moves offsets backwards, and a string with nested parentheses is replaced whole",
           "[paint][pdf-date]") {
   // §7.3.4.2: balanced parentheses and backslash escapes inside a literal string.
   const std::string before = tiny_pdf("<< /CreationDate (a (long) \\) date string) /Producer (x) >>");

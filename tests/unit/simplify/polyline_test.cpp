@@ -113,7 +113,7 @@ TEST_CASE("every original point stays within the tolerance of the drawn line", "
   }
 }
 
-TEST_CASE("a straight line keeps only its ends; a single repeated point keeps two copies", "[simplify]") {
+TEST_CASE("a straight line keeps only its ends, and a single repeated point keeps two copies", "[simplify]") {
   const auto line = series(1000, 10, 500, [](double x, std::size_t) { return 0.5 * x + 3; });
   const auto drawn = simplify_polyline(line, kTol);
   REQUIRE(drawn.size() == 2);
