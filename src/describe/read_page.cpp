@@ -100,9 +100,15 @@ class Builder {
     s.margins = {d, d, d, d};
     if (n && n["margins"]) s.margins = margins(n["margins"]);
     const Margins& m = s.margins;
-    if (m.left + m.right >= w * 0.8 || m.top + m.bottom >= h * 0.8)
-      throw InputError(doc_.loc(n["margins"]), "margins leave almost no room on the sheet",
-                       "margins may take at most 80% of the sheet's width or height");
+    if (m.left + m.right >= w * 0.8 || m.top + m.bottom >= h * 0.8) {
+      if (n && n["margins"])
+        throw InputError(doc_.loc(n["margins"]), "margins leave almost no room on the sheet",
+                         "margins may take at most 80% of the sheet's width or height");
+      // The default margins: point at the size that is too small for them.
+      throw InputError(n && n["size"] ? doc_.loc(n["size"]) : s.loc,
+                       "the sheet is too small for the default 15mm margins",
+                       "give smaller 'margins' or a larger sheet");
+    }
     return s;
   }
 
