@@ -73,6 +73,7 @@ struct PanelSpec {
   std::vector<ReferenceLine> references;
   Trend trend = Trend::none;
   AspectRule aspect = AspectRule::fill;
+  bool value_labels = false;  ///< write values on bars
   SourceLoc aspect_loc;
   SourceLoc loc;  ///< the panel mapping (or grid) this came from
 };

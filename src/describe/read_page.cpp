@@ -244,6 +244,7 @@ class Builder {
       p.references.clear();
       for (const auto& r : refs) p.references.push_back(reference(r));
     }
+    if (auto v = n["value-labels"]) p.value_labels = v.Scalar() == "true";
     if (auto t = n["trend"])
       p.trend = t.Scalar() == "line" ? Trend::line : t.Scalar() == "line-with-equation" ? Trend::line_with_equation : Trend::none;
     if (auto a = n["aspect"]) {

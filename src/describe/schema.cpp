@@ -164,6 +164,7 @@ struct Schema {
        {"references", &references, false, "reference lines: targets, thresholds, averages"},
        {"trend", &trend, false, "dot panels: least-squares trend line, optionally with its equation"},
        {"aspect", &aspect, false, "line panels: fill the cell, or bank the lines to 45 degrees"},
+       {"value-labels", &boolean, false, "bar panels: write each value inside its bar where it fits, else just beyond it"},
        {"y-right", &refused, false, "not available: forme refuses a second value axis"}});
   NodeSpec panels = list_of("a list of panels", &panel);
 

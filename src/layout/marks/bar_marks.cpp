@@ -6,6 +6,7 @@
 
 #include "colour/text_ink.h"
 #include "layout/marks/marks.h"
+#include "layout/marks/value_labels.h"
 #include "layout/text_items.h"
 #include "place/spread.h"
 
@@ -44,7 +45,12 @@ void draw_vertical_bar_marks(const MarkContext& ctx, DisplayPage& page) {
     const Rgb colour = ctx.colours.at(series[k].name);
     for (std::size_t i = 0; i < series[k].x.size(); ++i) {
       double left = f.px(series[k].x[i]) - band / 2 + each * static_cast<double>(k);
-      page.add(box(left, zero, left + each, f.py(series[k].y[i]), colour));
+      const double end = f.py(series[k].y[i]);
+      page.add(box(left, zero, left + each, end, colour));
+      if (ctx.data.spec->value_labels)
+        add_value_label({{left, std::min(zero, end), each, std::abs(end - zero)}, series[k].y[i], colour, false,
+                         series[k].y[i] >= 0 ? 1 : -1},
+                        f.y.format, st, page);
     }
   }
   if (!named(series) || !ctx.label_series) return;
@@ -76,10 +82,20 @@ void draw_horizontal_bar_marks(const MarkContext& ctx, DisplayPage& page) {
     const Rgb colour = ctx.colours.at(series[k].name);
     for (std::size_t i = 0; i < series[k].y.size(); ++i) {
       double top = f.py(series[k].y[i]) - band / 2 + each * static_cast<double>(k);
-      page.add(box(zero, top, f.px(series[k].x[i]), top + each, colour));
+      const double end = f.px(series[k].x[i]);
+      page.add(box(zero, top, end, top + each, colour));
+      ValuePlacement placed_value = ValuePlacement::inside;
+      if (ctx.data.spec->value_labels)
+        placed_value = add_value_label({{std::min(zero, end), top, std::abs(end - zero), each}, series[k].x[i], colour,
+                                        true, series[k].x[i] >= 0 ? 1 : -1},
+                                       f.x.format, st, page);
       if (series[k].y[i] == 0) {
         name_x[k] = std::max(zero, f.px(series[k].x[i]));
         name_y[k] = top + each / 2;
+        // A value written beyond this bar comes first; the name follows it.
+        if (placed_value == ValuePlacement::outside)
+          name_x[k] += shape_text(format_number(series[k].x[i], f.x.format), st.fonts.regular, st.label_size()).width +
+                       st.base * 0.6;
       }
     }
   }
