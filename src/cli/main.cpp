@@ -10,6 +10,8 @@
 #include "cli/colour_commands.h"
 #include "cli/render_job.h"
 #include "cli/signal_cleanup.h"
+#include "describe/json_schema.h"
+#include "describe/schema.h"
 #include "paint/painter.h"
 #include "text/font.h"
 
@@ -102,6 +104,9 @@ int main(int argc, char** argv) {
   auto* palette_cmd = app.add_subcommand("palette", "Show a palette with its distances under simulated colour vision.");
   palette_cmd->add_option("name", palette_name, "palette name")->required();
 
+  auto* schema_cmd = app.add_subcommand(
+      "schema", "Print a JSON Schema of the page description, for editors that check YAML as it is typed.");
+
   for (auto* sub : app.get_subcommands({})) sub->failure_message(usage_message);
 
   // CLI11 reports an unknown command as "A subcommand is required".
@@ -110,7 +115,7 @@ int main(int argc, char** argv) {
     for (auto* sub : app.get_subcommands({})) known |= sub->get_name() == argv[1];
     if (!known) {
       std::cerr << "forme: error: unknown command '" << argv[1]
-                << "'\n  hint: the commands are render, check, contrast and palette\n";
+                << "'\n  hint: the commands are render, check, contrast, palette and schema\n";
       return kExitUsage;
     }
   }
@@ -132,5 +137,9 @@ int main(int argc, char** argv) {
   if (*check_cmd) return check(check_page, strict, argv[0]);
   if (*contrast_cmd) return forme::run_contrast(fg, bg, std::cout, std::cerr);
   if (*palette_cmd) return forme::run_palette(palette_name, std::cout, std::cerr);
+  if (*schema_cmd) {
+    std::cout << forme::json_schema_text(forme::page_schema());
+    return 0;
+  }
   return kExitUsage;
 }
