@@ -10,6 +10,7 @@
 #include "cli/colour_commands.h"
 #include "cli/render_job.h"
 #include "cli/signal_cleanup.h"
+#include "cli/starters.h"
 #include "describe/json_schema.h"
 #include "describe/schema.h"
 #include "paint/painter.h"
@@ -68,6 +69,18 @@ int check(const std::string& page, bool strict, const char* argv0) {
   return 0;
 }
 
+int make_starter(const std::string& kind, const std::string& dir) {
+  try {
+    forme::write_starter(kind, dir);
+  } catch (const forme::InputError& e) {
+    std::cerr << forme::format_diagnostic(e.diagnostic()) << '\n';
+    return kExitInput;
+  }
+  std::cout << "wrote " << dir << "/page.yaml; render it with: forme render " << dir << "/page.yaml -o " << kind
+            << ".pdf\n";
+  return 0;
+}
+
 }  // namespace
 
 int main(int argc, char** argv) {
@@ -107,6 +120,13 @@ int main(int argc, char** argv) {
   auto* schema_cmd = app.add_subcommand(
       "schema", "Print a JSON Schema of the page description, for editors that check YAML as it is typed.");
 
+  std::string starter_kind, starter_dir;
+  auto* new_cmd = app.add_subcommand("new", "Write a starter page description with example data into a new folder.");
+  new_cmd->add_option("kind", starter_kind, "briefing, report, poster or figure")
+      ->required()
+      ->check(CLI::IsMember(forme::starter_kinds()));
+  new_cmd->add_option("folder", starter_dir, "a folder that does not exist yet, or an empty one")->required();
+
   for (auto* sub : app.get_subcommands({})) sub->failure_message(usage_message);
 
   // CLI11 reports an unknown command as "A subcommand is required".
@@ -115,7 +135,7 @@ int main(int argc, char** argv) {
     for (auto* sub : app.get_subcommands({})) known |= sub->get_name() == argv[1];
     if (!known) {
       std::cerr << "forme: error: unknown command '" << argv[1]
-                << "'\n  hint: the commands are render, check, contrast, palette and schema\n";
+                << "'\n  hint: the commands are render, check, contrast, palette, schema and new\n";
       return kExitUsage;
     }
   }
@@ -137,6 +157,7 @@ int main(int argc, char** argv) {
   if (*check_cmd) return check(check_page, strict, argv[0]);
   if (*contrast_cmd) return forme::run_contrast(fg, bg, std::cout, std::cerr);
   if (*palette_cmd) return forme::run_palette(palette_name, std::cout, std::cerr);
+  if (*new_cmd) return make_starter(starter_kind, starter_dir);
   if (*schema_cmd) {
     std::cout << forme::json_schema_text(forme::page_schema());
     return 0;

@@ -64,12 +64,14 @@ TEST_CASE("the JSON Schema is valid per its metaschema (JSON Schema draft 2020-1
   CHECK(r.out.find("Draft202012Validator") != std::string::npos);
 }
 
-TEST_CASE("every layout and test page validates against the JSON Schema (python3-jsonschema)", "[outside][schema]") {
+TEST_CASE("every layout, starter and test page validates against the JSON Schema (python3-jsonschema)",
+          "[outside][schema]") {
   TempDir dir;
   const std::string schema = write_schema(dir);
   std::vector<std::string> pages = layout_pages();
   for (const auto& p : pages_under(std::string(FORME_TEST_DIR) + "/pages")) pages.push_back(p);
-  REQUIRE(pages.size() >= 5);
+  for (const auto& p : pages_under(std::string(FORME_SOURCE_DIR) + "/starters")) pages.push_back(p);
+  REQUIRE(pages.size() >= 9);
   auto lines = verdicts(schema, pages);
   for (std::size_t i = 0; i < pages.size(); ++i) CHECK(lines[i] == "ok " + pages[i]);
 }
