@@ -98,6 +98,18 @@ struct TableSource {
   SourceLoc loc;
 };
 
+/// Document information for the PDF; its title is the heading's title.
+struct DocumentSpec {
+  std::string author, subject;
+  std::vector<std::string> keywords;
+};
+
+/// What a PDF carries of the data besides the chart.
+struct DataSpec {
+  bool attach = true;       ///< embed each panel's plotted rows as a CSV file
+  bool table_page = false;  ///< set the plotted rows as a table after the chart
+};
+
 struct PageSpec {
   std::string file;      ///< the description's path, for messages
   std::string base_dir;  ///< folder that relative paths start from
@@ -109,6 +121,10 @@ struct PageSpec {
   std::vector<PanelSpec> panels;
   std::string source;
   std::vector<std::string> notes;
+  std::vector<Located> source_links;  ///< URLs the source line links to
+  std::string limitations;            ///< what the data cannot show
+  DocumentSpec document;
+  DataSpec data;
   double type_size = 0;  ///< base text size in points; 0 = from the sheet
   SourceLoc loc;
 };

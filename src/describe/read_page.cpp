@@ -1,5 +1,6 @@
 #include "describe/read_page.h"
 
+#include <cctype>
 #include <filesystem>
 #include <sstream>
 
@@ -47,6 +48,22 @@ class Builder {
     p.source = str(r["source"]);
     if (auto notes = r["notes"])
       for (const auto& n : notes) p.notes.push_back(n.Scalar());
+    if (auto links = r["source-link"]) {
+      if (links.IsScalar()) p.source_links.push_back(url(links));
+      else
+        for (const auto& l : links) p.source_links.push_back(url(l));
+    }
+    p.limitations = str(r["limitations"]);
+    if (auto d = r["document"]) {
+      p.document.author = str(d["author"]);
+      p.document.subject = str(d["subject"]);
+      if (auto k = d["keywords"])
+        for (const auto& w : k) p.document.keywords.push_back(w.Scalar());
+    }
+    if (auto d = r["data"]) {
+      if (d["attach"]) p.data.attach = d["attach"].Scalar() == "true";
+      if (d["table-page"]) p.data.table_page = d["table-page"].Scalar() == "true";
+    }
     if (auto t = r["type"]; t && t["size"]) {
       p.type_size = *parse_length(t["size"].Scalar());
       if (p.type_size < 6)
@@ -61,6 +78,25 @@ class Builder {
   Located located(const YAML::Node& n) const {
     if (!n) return {};
     return {n.Scalar(), doc_.loc(n)};
+  }
+
+  // A link target must name its scheme (RFC 3986 §3.1: a letter, then
+  // letters, digits, '+', '-' or '.', then ':') and hold no spaces, which a
+  // URI cannot contain unescaped (RFC 3986 §2).
+  Located url(const YAML::Node& n) const {
+    Located u = located(n);
+    const std::string& v = u.value;
+    std::size_t colon = v.find(':');
+    bool ok = colon != std::string::npos && colon > 0 && std::isalpha(static_cast<unsigned char>(v[0]));
+    for (std::size_t i = 1; ok && i < colon; ++i) {
+      const unsigned char c = static_cast<unsigned char>(v[i]);
+      ok = std::isalnum(c) || c == '+' || c == '-' || c == '.';
+    }
+    for (std::size_t i = 0; ok && i < v.size(); ++i) ok = static_cast<unsigned char>(v[i]) > ' ';
+    if (!ok || colon + 1 == v.size())
+      throw InputError(u.loc, "'" + v + "' is not a link a PDF reader can follow",
+                       "write the whole address with its scheme, such as https://example.org/data, with no spaces");
+    return u;
   }
 
   SheetSpec sheet(const YAML::Node& n) {

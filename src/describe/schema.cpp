@@ -168,6 +168,20 @@ struct Schema {
        {"y-right", &refused, false, "not available: forme refuses a second value axis"}});
   NodeSpec panels = list_of("a list of panels", &panel);
 
+  NodeSpec document = mapping("document information",
+      {{"author", &text, false, "who made the page, written into the PDF's document information"},
+       {"subject", &text, false, "what the page is about, in a sentence, for the PDF's document information"},
+       {"keywords", &text_list, false, "words a reader's search or a catalogue can find the file by"}},
+      "document information for the PDF (its title is the heading's title)");
+  NodeSpec source_link = [&] {
+    NodeSpec n = list_of("a URL or a list of URLs", &text);
+    n.scalar_ok = true;
+    return n;
+  }();
+  NodeSpec data = mapping("what the file carries of the data",
+      {{"attach", &boolean, false, "PDF: embed the rows each panel plots as CSV files (default true)"},
+       {"table-page", &boolean, false, "PDF: set the plotted rows as a table on pages after the chart (default false)"}});
+
   NodeSpec type = mapping("type settings", {{"size", &length, false, "base text size (tick labels, notes)"}});
 
   NodeSpec page = mapping("a page description",
@@ -179,6 +193,10 @@ struct Schema {
        {"panels", &panels, false, "panels listed one by one"},
        {"source", &text, false, "source line printed at the foot of the page"},
        {"notes", &text_list, false, "notes printed at the foot of the page"},
+       {"source-link", &source_link, false, "where the source can be found; the PDF's source line links to it"},
+       {"limitations", &text, false, "what the data cannot show, printed at the foot of the page"},
+       {"document", &document, false, "author, subject and keywords for the PDF's document information"},
+       {"data", &data, false, "whether the PDF carries the plotted rows: attached CSV files, a table page"},
        {"type", &type, false, "type sizes"}});
 };
 
