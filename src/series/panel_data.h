@@ -35,6 +35,10 @@ struct PanelData {
   std::vector<std::string> categories;
   std::vector<Series> series;
   std::size_t rows_used = 0;
+  /// The table the panel reads, and the indices of the rows it plotted (in
+  /// table order; rows with a missing cell are not among them).
+  std::string table;
+  std::vector<std::size_t> rows;
   TransformStatement transform;  ///< what was done to the values, if anything
 };
 

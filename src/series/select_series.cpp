@@ -68,6 +68,7 @@ PanelData build_panel(const PanelSpec& p, const Table& t, const std::vector<std:
   d.spec = &p;
   d.kind = p.kind;
   d.title = std::move(title);
+  d.table = t.name;
   const bool xcat = x_is_category(p, xc), ycat = y_is_category(p, yc);
   d.x_kind = xcat ? AxisKind::category : kind_of(xc);
   d.y_kind = ycat ? AxisKind::category : kind_of(yc);
@@ -100,6 +101,7 @@ PanelData build_panel(const PanelSpec& p, const Table& t, const std::vector<std:
     s.x.push_back(x);
     s.y.push_back(y);
     ++d.rows_used;
+    d.rows.push_back(r);
   }
   // Lines are drawn in x order whatever order the file had (for text
   // categories, their order of first appearance: an ordinal scale).
