@@ -7,11 +7,13 @@ pkg_check_modules(HARFBUZZ REQUIRED IMPORTED_TARGET harfbuzz)
 pkg_check_modules(FREETYPE REQUIRED IMPORTED_TARGET freetype2)
 # libunibreak: Unicode line breaking (UAX #14) for wrapped notes and callouts.
 pkg_check_modules(UNIBREAK REQUIRED IMPORTED_TARGET libunibreak)
+# libqpdf: embeds the plotted rows and adds link annotations to finished PDFs.
+pkg_check_modules(QPDF REQUIRED IMPORTED_TARGET libqpdf)
 find_package(yaml-cpp REQUIRED)
 find_package(CLI11 REQUIRED)
 
 add_library(forme_deps INTERFACE)
 target_link_libraries(forme_deps INTERFACE
-  PkgConfig::CAIRO PkgConfig::HARFBUZZ PkgConfig::FREETYPE PkgConfig::UNIBREAK
+  PkgConfig::CAIRO PkgConfig::HARFBUZZ PkgConfig::FREETYPE PkgConfig::UNIBREAK PkgConfig::QPDF
   yaml-cpp CLI11::CLI11)
 add_library(forme::deps ALIAS forme_deps)

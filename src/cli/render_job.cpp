@@ -19,7 +19,10 @@
 #include "layout/page_style.h"
 #include "paint/atomic_file.h"
 #include "paint/pdf_dates.h"
+#include "layout/data_table_page.h"
+#include "series/plotted_rows.h"
 #include "series/select_series.h"
+#include "summary/describe_chart.h"
 
 namespace forme {
 
@@ -57,6 +60,17 @@ std::vector<Table> load_tables(const PageSpec& spec, const Limits& limits) {
   return tables;
 }
 
+DocumentInfo document_info(const PageSpec& spec, const std::vector<PlottedRows>& plotted) {
+  DocumentInfo info;
+  info.title = spec.title;
+  info.author = spec.document.author;
+  info.subject = spec.document.subject;
+  info.keywords = spec.document.keywords;
+  if (spec.data.attach)
+    for (const auto& p : plotted) info.attachments.push_back({p.file_name, p.description, "text/csv", p.csv});
+  return info;
+}
+
 // Clears the signal handler's temporary path however the render ends.
 struct CleanupPathScope {
   CleanupPathScope() = default;
@@ -78,8 +92,8 @@ void pause_for_tests() {
 
 }  // namespace
 
-DisplayPage compose_page(const std::string& page_path, const std::string& font_dir, DiagnosticSink& sink,
-                         const Limits& limits) {
+ComposedDocument compose_document(const std::string& page_path, const std::string& font_dir, DiagnosticSink& sink,
+                                  const Limits& limits) {
   std::vector<Diagnostic> errors;
   std::optional<PageSpec> spec = read_page(page_path, errors, limits);  // 1. read description
   if (!spec) {
@@ -91,24 +105,38 @@ DisplayPage compose_page(const std::string& page_path, const std::string& font_d
   std::vector<PanelAxes> axes = resolve_axes(panels, spec->grid, sink); // 3. resolve scales
   audit_page(*spec, panels, axes, sink);
   PageStyle style = style_for(*spec, font_dir);                     // 4. measure text (fonts)
-  DisplayPage page = layout_page(*spec, panels, axes, style, sink); // 5-6. lay out, place labels
-  audit_layout(*spec, page, sink);
+  ComposedDocument doc;
+  doc.pages.push_back(layout_page(*spec, panels, axes, style, sink)); // 5-6. lay out, place labels
+  audit_layout(*spec, doc.pages.front(), sink);
   for (const auto& d : sink.items())
     if (d.severity == Severity::error) throw InputError(d);  // reported already; stops the write
-  return page;
+  // What travels with the chart: the rows plotted, the page in words.
+  const std::vector<PlottedRows> plotted = plotted_rows(*spec, panels, tables);
+  if (spec->data.table_page)
+    for (auto& p : data_table_pages(*spec, plotted, style)) doc.pages.push_back(std::move(p));
+  doc.info = document_info(*spec, plotted);
+  doc.info.description = describe_chart(*spec, panels, axes);
+  return doc;
+}
+
+DisplayPage compose_page(const std::string& page_path, const std::string& font_dir, DiagnosticSink& sink,
+                         const Limits& limits) {
+  return std::move(compose_document(page_path, font_dir, sink, limits).pages.front());
 }
 
 std::string render_to_bytes(const std::string& page_path, OutputFormat format, const std::string& font_dir,
                             double dpi, DiagnosticSink& warnings, const Limits& limits) {
-  DisplayPage page = compose_page(page_path, font_dir, warnings, limits);
+  ComposedDocument doc = compose_document(page_path, font_dir, warnings, limits);
   std::ostringstream out;
   PaintOptions po;
   po.dpi = dpi;
-  po.info.title = page.title;
+  po.info = std::move(doc.info);
   // Reproducible output: a build may pin the document date (reproducible-builds.org SOURCE_DATE_EPOCH).
   po.info.creation_time = parse_source_date_epoch(std::getenv("SOURCE_DATE_EPOCH"));
   auto painter = make_painter(format, out, po);                     // 7. paint
-  painter->paint(page);
+  // SVG and PNG hold one page: the chart.
+  const std::size_t pages = format == OutputFormat::pdf ? doc.pages.size() : 1;
+  for (std::size_t i = 0; i < pages; ++i) painter->paint(doc.pages[i]);
   painter->finish();
   return std::move(out).str();
 }

@@ -39,7 +39,18 @@ RenderResult render_file(const RenderOptions& options);
 /// warnings) without writing anything: `forme check`.
 RenderResult check_file(const std::string& page_path, const std::string& font_dir, const Limits& limits = {});
 
-/// Runs every stage up to painting: the laid-out page (tests read its text
+/// Everything one render paints: the chart page, then any data table
+/// pages, and the document information (metadata, description, attachments).
+struct ComposedDocument {
+  std::vector<DisplayPage> pages;
+  DocumentInfo info;
+};
+
+/// Runs every stage up to painting. Throws InputError.
+ComposedDocument compose_document(const std::string& page_path, const std::string& font_dir,
+                                  DiagnosticSink& warnings, const Limits& limits = {});
+
+/// Runs every stage up to painting: the laid-out chart page (tests read its text
 /// positions). Throws InputError.
 DisplayPage compose_page(const std::string& page_path, const std::string& font_dir, DiagnosticSink& warnings,
                          const Limits& limits = {});

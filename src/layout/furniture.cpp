@@ -43,7 +43,17 @@ double set_footer(const PageSpec& spec, const PageStyle& st, const Rect& content
   };
   for (const auto& n : spec.notes) add(n, TextRole::note, st.fonts.regular);
   for (const auto& n : extra_notes) add(n, TextRole::note, st.fonts.regular);
-  if (!spec.source.empty()) add(spec.source, TextRole::source, st.fonts.regular);
+  if (!spec.limitations.empty()) add("Limitations: " + spec.limitations, TextRole::note, st.fonts.regular);
+  // The source line links to the first address; every address is also
+  // printed under it, linked to itself, so a printed page still gives it.
+  std::vector<std::string> uri_of(lines.size());
+  auto add_linked = [&](const std::string& text, const std::string& uri) {
+    add(text, TextRole::source, st.fonts.regular);
+    uri_of.resize(lines.size(), uri);
+  };
+  const std::string first_link = spec.source_links.empty() ? std::string() : spec.source_links.front().value;
+  if (!spec.source.empty()) add_linked(spec.source, first_link);
+  for (const auto& l : spec.source_links) add_linked(l.value, l.value);
   if (lines.empty()) return 0;
   const double leading = PageStyle::line_height(st.fonts.regular, size);
   const double height = leading * static_cast<double>(lines.size());
@@ -53,8 +63,11 @@ double set_footer(const PageSpec& spec, const PageStyle& st, const Rect& content
   rule.points = {{content.x, y - st.base * 0.6}, {content.right(), y - st.base * 0.6}};
   rule.stroke = Stroke{st.ink.grid, st.rule_width(), {}, false};
   page.add(std::move(rule));
-  for (auto& [line, role] : lines) {
-    page.add(text_at(line, content.x, y + line.ascent, Align::left, st.ink.muted, role));
+  for (std::size_t i = 0; i < lines.size(); ++i) {
+    auto& [line, role] = lines[i];
+    TextItem item = text_at(line, content.x, y + line.ascent, Align::left, st.ink.muted, role);
+    if (!uri_of[i].empty()) page.links.push_back(LinkArea{item.box(), uri_of[i]});
+    page.add(std::move(item));
     y += leading;
   }
   return height + st.base * 1.6;

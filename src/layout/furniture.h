@@ -14,8 +14,9 @@ namespace forme {
 double set_heading(const PageSpec& spec, const std::string& standfirst, const PageStyle& style, const Rect& content,
                    DisplayPage& page);
 
-/// Sets source and notes against the bottom of `content`; returns the
-/// height used (including the space above it).
+/// Sets notes, limitations, the source line and its link addresses against
+/// the bottom of `content`, recording a link area over each linked line;
+/// returns the height used (including the space above it).
 double set_footer(const PageSpec& spec, const PageStyle& style, const Rect& content, DisplayPage& page,
                   const std::vector<std::string>& extra_notes);
 

@@ -50,6 +50,13 @@ struct TextItem {
   }
 };
 
+/// An area a reader can click to open `uri` (a PDF link annotation,
+/// ISO 32000-1 §12.5.6.5, with a URI action, §12.6.4.7).
+struct LinkArea {
+  Rect area;  ///< page coordinates, points, y down
+  std::string uri;
+};
+
 using DisplayItem = std::variant<PathItem, CircleItem, TextItem>;
 
 struct DisplayPage {
@@ -59,6 +66,8 @@ struct DisplayPage {
   /// Where layout put each panel's plot area, in panel order. Painters
   /// ignore it; checks and tests read it.
   std::vector<Rect> plot_areas;
+  /// Clickable areas (PDF only; drawn by nothing, placed over items drawn).
+  std::vector<LinkArea> links;
 
   void add(DisplayItem item) { items.push_back(std::move(item)); }
 };

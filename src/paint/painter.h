@@ -7,6 +7,7 @@
 #include <optional>
 #include <ostream>
 #include <string>
+#include <vector>
 
 #include "paint/display_list.h"
 
@@ -14,9 +15,23 @@ namespace forme {
 
 enum class OutputFormat { pdf, svg, png };
 
+/// A file carried inside a PDF (ISO 32000-1 §7.11.4 embedded file streams).
+struct EmbeddedFile {
+  std::string name;         ///< file name a reader saves it under
+  std::string description;  ///< shown beside the name in a reader's attachment list
+  std::string mime_type;    ///< e.g. "text/csv"
+  std::string bytes;
+};
+
 struct DocumentInfo {
   std::string title;
   std::string creator = "forme";
+  std::string author, subject;        ///< PDF document information
+  std::vector<std::string> keywords;  ///< PDF document information, joined by ", "
+  /// What the page shows, in sentences: an SVG's <desc> (its <title> is `title`).
+  std::string description;
+  /// Files a PDF carries (PDF only; other formats ignore them).
+  std::vector<EmbeddedFile> attachments;
   /// When the document was made, in seconds since 1970-01-01T00:00:00Z;
   /// nullopt dates it at the time of painting. Fixing it (the driver takes
   /// SOURCE_DATE_EPOCH) makes repeated PDF output byte-identical.

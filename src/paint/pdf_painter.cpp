@@ -10,6 +10,7 @@
 #include "paint/painter.h"
 #include "paint/pdf_creation_date.h"
 #include "paint/pdf_dates.h"
+#include "paint/pdf_extras.h"
 
 namespace forme {
 
@@ -31,10 +32,12 @@ class PdfPainter final : public Painter {
       const std::string& title = options_.info.title.empty() ? page.title : options_.info.title;
       if (!title.empty()) cairo_pdf_surface_set_metadata(surface_, CAIRO_PDF_METADATA_TITLE, title.c_str());
       cairo_pdf_surface_set_metadata(surface_, CAIRO_PDF_METADATA_CREATOR, options_.info.creator.c_str());
+      set_document_information();
       cr_ = cairo_create(surface_);
     } else {
       cairo_pdf_surface_set_size(surface_, page.width, page.height);
     }
+    links_.push_back(PageLinks{page.height, page.links});
     draw_page(cr_, page);
     cairo_show_page(cr_);
     check_cairo(cairo_status(cr_), "PDF page");
@@ -51,13 +54,25 @@ class PdfPainter final : public Painter {
     // Cairo's own date is the time of painting and cannot be set in the
     // form ISO 32000-1 §7.9.4 asks for, so the date is written afterwards.
     const std::int64_t when = options_.info.creation_time.value_or(static_cast<std::int64_t>(std::time(nullptr)));
-    const std::string bytes = set_pdf_creation_date(std::move(buffer_).str(), pdf_date_utc(when));
+    std::string bytes = set_pdf_creation_date(std::move(buffer_).str(), pdf_date_utc(when));
+    // Attachments and links go in last: the date rewrite reads Cairo's own layout.
+    bytes = add_pdf_extras(bytes, options_.info.attachments, links_);
     out_.write(bytes.data(), static_cast<std::streamsize>(bytes.size()));
     if (!out_) throw std::runtime_error("PDF file: write failed");
   }
 
  private:
+  void set_document_information() {
+    const DocumentInfo& d = options_.info;
+    if (!d.author.empty()) cairo_pdf_surface_set_metadata(surface_, CAIRO_PDF_METADATA_AUTHOR, d.author.c_str());
+    if (!d.subject.empty()) cairo_pdf_surface_set_metadata(surface_, CAIRO_PDF_METADATA_SUBJECT, d.subject.c_str());
+    std::string words;
+    for (const auto& k : d.keywords) words += (words.empty() ? "" : ", ") + k;
+    if (!words.empty()) cairo_pdf_surface_set_metadata(surface_, CAIRO_PDF_METADATA_KEYWORDS, words.c_str());
+  }
+
   std::ostream& out_;
+  std::vector<PageLinks> links_;  ///< each painted page's links, in page order
   std::ostringstream buffer_;  ///< Cairo's output, finished before it reaches out_
   PaintOptions options_;
   cairo_surface_t* surface_ = nullptr;

@@ -8,6 +8,7 @@
 #include "paint/cairo_stream.h"
 #include "paint/draw_cairo.h"
 #include "paint/painter.h"
+#include "paint/svg_description.h"
 #include "paint/svg_ids.h"
 
 namespace forme {
@@ -16,7 +17,7 @@ namespace {
 
 class SvgPainter final : public Painter {
  public:
-  explicit SvgPainter(std::ostream& out) : out_(out) {}
+  SvgPainter(std::ostream& out, const PaintOptions& options) : out_(out), title_(options.info.title), description_(options.info.description) {}
 
   void paint(const DisplayPage& page) override {
     if (painted_) throw std::runtime_error("SVG holds one page; write a PDF for several");
@@ -33,7 +34,8 @@ class SvgPainter final : public Painter {
     cairo_surface_destroy(s);
     check_cairo(st, "SVG drawing");
     check_cairo(st2, "SVG file");
-    const std::string bytes = renumber_svg_ids(std::move(buffer).str());
+    const std::string& title = title_.empty() ? page.title : title_;
+    const std::string bytes = add_svg_description(renumber_svg_ids(std::move(buffer).str()), title, description_);
     out_.write(bytes.data(), static_cast<std::streamsize>(bytes.size()));
     if (!out_) throw std::runtime_error("SVG file: write failed");
   }
@@ -41,13 +43,14 @@ class SvgPainter final : public Painter {
 
  private:
   std::ostream& out_;
+  std::string title_, description_;  ///< the SVG's <title> and <desc>
   bool painted_ = false;
 };
 
 }  // namespace
 
-std::unique_ptr<Painter> make_svg_painter(std::ostream& out, const PaintOptions&) {
-  return std::make_unique<SvgPainter>(out);
+std::unique_ptr<Painter> make_svg_painter(std::ostream& out, const PaintOptions& options) {
+  return std::make_unique<SvgPainter>(out, options);
 }
 
 }  // namespace forme

@@ -1,0 +1,37 @@
+#pragma once
+/// What a finished PDF gets after Cairo: embedded files and link annotations.
+///
+/// Cairo 1.16 cannot embed files, and its link tags are only sound inside a
+/// tagged structure forme does not write, so both are added to the finished
+/// bytes with the qpdf library:
+///  - each file becomes an embedded file stream (ISO 32000-1 §7.11.4) with
+///    its size and MD5 checksum in /Params, referred to by a file
+///    specification (§7.11.3) listed in the catalog's /Names /EmbeddedFiles
+///    name tree (§7.7.4) and in the catalog's /AF array with relationship
+///    /Data (ISO 32000-2 §14.13: associated files holding the data a page shows);
+///  - each link becomes a /Link annotation (§12.5.6.5) with a URI action
+///    (§12.6.4.7) and no border, in the page's /Annots array.
+/// The file is rewritten whole, with no dates and a document /ID computed
+/// from its content, so the same page still gives the same bytes.
+#include <string>
+#include <vector>
+
+#include "paint/display_list.h"
+#include "paint/painter.h"
+
+namespace forme {
+
+/// Links for one page: the page's height (to turn y-down points into PDF
+/// user space) and its areas.
+struct PageLinks {
+  double height = 0;
+  std::vector<LinkArea> links;
+};
+
+/// Returns `pdf` with `files` embedded and `pages[i]`'s links on page i.
+/// Returns it unchanged when there is nothing to add. Throws
+/// std::runtime_error if qpdf cannot read or write the file.
+std::string add_pdf_extras(const std::string& pdf, const std::vector<EmbeddedFile>& files,
+                           const std::vector<PageLinks>& pages);
+
+}  // namespace forme
