@@ -1,6 +1,8 @@
 #include "describe/read_page.h"
 
 #include <cctype>
+#include <charconv>
+#include <climits>
 #include <filesystem>
 #include <sstream>
 
@@ -74,6 +76,15 @@ class Builder {
   }
 
  private:
+  // A whole number read as the validator reads it: decimal, so "08" is 8
+  // (yaml-cpp's as<int> takes it for bad octal and throws), and values past
+  // int's range saturate so the range checks below refuse them.
+  static int whole(const YAML::Node& n) {
+    long v = 0;
+    const std::string& s = n.Scalar();
+    std::from_chars(s.data(), s.data() + s.size(), v);
+    return v > INT_MAX ? INT_MAX : v < INT_MIN ? INT_MIN : static_cast<int>(v);
+  }
   static std::string str(const YAML::Node& n) { return n && n.IsScalar() ? n.Scalar() : std::string(); }
   Located located(const YAML::Node& n) const {
     if (!n) return {};
@@ -222,7 +233,7 @@ class Builder {
   }
 
   int positive(const YAML::Node& n, const char* what) {
-    int v = n.as<int>();
+    int v = whole(n);
     if (v < 1 || v > 50)
       throw InputError(doc_.loc(n), std::string(what) + " must be between 1 and 50");
     return v;
@@ -249,7 +260,7 @@ class Builder {
     }
     if (n["style"]) f.style = style(n["style"].Scalar());
     if (n["decimals"]) {
-      f.decimals = n["decimals"].as<int>();
+      f.decimals = whole(n["decimals"]);
       if (f.decimals < 0 || f.decimals > 10)
         throw InputError(doc_.loc(n["decimals"]), "decimals must be between 0 and 10");
     }
@@ -317,7 +328,7 @@ class Builder {
     if (n["base"]) t.base = located(n["base"]);
     if (n["minus"]) t.minus = located(n["minus"]);
     if (n["lag"]) {
-      t.lag = n["lag"].as<int>();
+      t.lag = whole(n["lag"]);
       if (t.lag < 1) throw InputError(doc_.loc(n["lag"]), "lag must be 1 or more");
     }
     if (t.kind == TransformSpec::Kind::index && t.base.empty())
