@@ -28,11 +28,14 @@ std::string q(const std::string& s) { return "'" + s + "'"; }
 // The words bash offers after typing `line` and pressing tab, with the
 // completion script loaded on its own (no bash-completion package).
 std::set<std::string> offered(const std::string& line) {
-  std::string script = "source " + q(kCompletion) + "; COMP_LINE=" + q(line) + "; read -ra COMP_WORDS <<< \"$COMP_LINE\"; ";
-  if (line.back() == ' ') script += "COMP_WORDS+=(''); ";
-  script += "COMP_CWORD=$((${#COMP_WORDS[@]} - 1)); _forme; printf '%s\\n' \"${COMPREPLY[@]}\"";
-  auto r = run("bash --norc -c " + q(script));
-  INFO(r.err);
+  TempDir dir;
+  std::string script = "source " + q(kCompletion) + "\nCOMP_LINE=" + q(line) +
+                       "\nread -ra COMP_WORDS <<< \"$COMP_LINE\"\n";
+  if (line.back() == ' ') script += "COMP_WORDS+=('')\n";
+  script += "COMP_CWORD=$((${#COMP_WORDS[@]} - 1))\n_forme\nprintf '%s\\n' \"${COMPREPLY[@]}\"\n";
+  write_file(dir.file("complete.sh"), script);
+  auto r = run("cd " + q(dir.path()) + " && bash --norc complete.sh");
+  INFO(script << r.err);
   REQUIRE(r.exit_code == 0);
   std::set<std::string> words;
   std::istringstream in(r.out);
