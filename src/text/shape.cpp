@@ -4,8 +4,22 @@
 
 namespace forme {
 
-ShapedText shape_text(const std::string& utf8, const FontRef& font, double size,
-                      const ShapeOptions& options) {
+namespace {
+
+// Numbers are written with the true minus sign (U+2212). A font without one
+// would draw an empty box, so fall back to the hyphen-minus it surely has.
+std::string with_drawable_minus(const std::string& utf8, const Font& font) {
+  static const std::string minus = "\u2212";
+  if (utf8.find(minus) == std::string::npos || font.covers(0x2212)) return utf8;
+  std::string out = utf8;
+  for (std::size_t p = out.find(minus); p != std::string::npos; p = out.find(minus, p + 1)) out.replace(p, minus.size(), "-");
+  return out;
+}
+
+}  // namespace
+
+ShapedText shape_text(const std::string& text, const FontRef& font, double size, const ShapeOptions& options) {
+  const std::string utf8 = with_drawable_minus(text, *font);
   ShapedText out;
   out.utf8 = utf8;
   out.font = font;

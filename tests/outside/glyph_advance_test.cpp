@@ -87,3 +87,12 @@ TEST_CASE("tabular figures give every digit the same advance", "[text]") {
   double w0 = forme::shape_text("0000", font, 10, tnum).width;
   CHECK(w1 == Approx(w0).margin(1e-9));
 }
+
+TEST_CASE("negative numbers never draw the missing-glyph box", "[text]") {
+  // Glyph 0 is .notdef in every TrueType font (OpenType spec, 'Recommendations
+  // for OpenType fonts': the first glyph is the missing-character glyph).
+  auto font = forme::Font::open(forme::find_font_dir(FORME_BINARY) + "/NotoSans-Regular.ttf");
+  auto shaped = forme::shape_text("\u22125.0 and \u2212120", font, 10);
+  REQUIRE(!shaped.glyphs.empty());
+  for (const auto& g : shaped.glyphs) CHECK(g.index != 0);
+}
