@@ -13,7 +13,7 @@ TEST_CASE("title and desc become the root element's first children", "[svg]") {
         "<title>Loans &amp; renewals</title>\n<desc>A &lt; B</desc>\n<g/>\n</svg>\n");
 }
 
-TEST_CASE("nothing to add leaves the file as it was; a file without a root svg is refused", "[svg]") {
+TEST_CASE("nothing to add leaves the file as it was, and a file without a root svg is refused", "[svg]") {
   const std::string svg = "<svg>\n</svg>\n";
   CHECK(forme::add_svg_description(svg, "", "") == svg);
   CHECK(forme::add_svg_description("<svg>\n</svg>\n", "T", "") == "<svg>\n<title>T</title>\n</svg>\n");
