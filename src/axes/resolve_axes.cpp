@@ -240,8 +240,7 @@ std::vector<PanelAxes> resolve_axes(const std::vector<PanelData>& panels, const 
       out[j].x.own_scale = own_x;
       out[j].y.own_scale = own_y;
       // Explicit panel lists may title their axes differently.
-      out[j].x.title = one.front()->spec == group.front()->spec ? out[j].x.title
-                                                               : axis_title(panels[j].spec->x_axis.title, panels[j].spec->x_axis.unit);
+      out[j].x.title = axis_title(panels[j].spec->x_axis.title, panels[j].spec->x_axis.unit);
       if (!out[j].y.log) out[j].y.title = value_title(panels[j], panels[j].spec->y_axis);
     }
   }

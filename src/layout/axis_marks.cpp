@@ -42,8 +42,7 @@ int label_stride(const Axis& axis, const std::vector<ShapedText>& labels, double
   return std::max(1, static_cast<int>(std::ceil((widest(labels) + gap) / spacing)));
 }
 
-double x_label_band(const Axis& x, const PageStyle& st, const std::vector<ShapedText>& labels,
-                    double category_width) {
+double x_label_band(const Axis& x, const PageStyle& st, double category_width) {
   const double line = PageStyle::line_height(st.fonts.regular, st.label_size());
   double lines = 1;
   if (x.kind == AxisKind::date)
@@ -53,7 +52,6 @@ double x_label_band(const Axis& x, const PageStyle& st, const std::vector<Shaped
     for (const auto& t : x.ticks)
       lines = std::max(lines, static_cast<double>(
                                   wrap_text(t.label, st.fonts.regular, st.label_size(), category_width).size()));
-  (void)labels;
   return st.tick_length() + st.base * 0.3 + line * lines;
 }
 

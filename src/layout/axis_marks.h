@@ -32,7 +32,6 @@ void draw_axis_labels(const PlotFrame& f, const PageStyle& style, const AxisLabe
                       DisplayPage& page);
 
 /// Height taken below the plot by x tick labels (and year lines of date axes).
-double x_label_band(const Axis& x, const PageStyle& style, const std::vector<ShapedText>& labels,
-                    double category_width);
+double x_label_band(const Axis& x, const PageStyle& style, double category_width);
 
 }  // namespace forme

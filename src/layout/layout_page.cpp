@@ -76,7 +76,7 @@ GridMeasure measure_grid(const std::vector<PanelData>& panels, const std::vector
     m.y_label_width = std::max(m.y_label_width, std::min(widest(ylabels), est_plot_width * 0.4));
     auto xlabels = shape_tick_labels(a.x, st);
     double cat_w = a.x.kind == AxisKind::category ? est_plot_width / std::max<std::size_t>(1, a.x.categories.size()) * 0.95 : 0;
-    m.x_band.push_back(x_label_band(a.x, st, xlabels, cat_w));
+    m.x_band.push_back(x_label_band(a.x, st, cat_w));
     if (!xlabels.empty() && a.x.kind != AxisKind::category) last_x_half = std::max(last_x_half, xlabels.back().width / 2);
     any_title |= !panels[i].title.empty();
     any_ytitle |= !a.y.title.empty() && a.y.kind != AxisKind::category;
