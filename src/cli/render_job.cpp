@@ -5,6 +5,7 @@
 #include <cerrno>
 
 #include <cstdlib>
+#include <ctime>
 #include <filesystem>
 #include <optional>
 #include <sstream>
@@ -17,6 +18,7 @@
 #include "describe/read_page.h"
 #include "layout/layout_page.h"
 #include "layout/page_style.h"
+#include "layout/press_sheet.h"
 #include "paint/atomic_file.h"
 #include "paint/pdf_dates.h"
 #include "layout/data_table_page.h"
@@ -32,7 +34,7 @@ PageStyle style_for(const PageSpec& spec, const std::string& font_dir) {
   PageStyle st;
   st.fonts = open_bundled_fonts(font_dir);
   st.base = spec.type_size > 0 ? spec.type_size : base_size_for_sheet(spec.sheet.width, spec.sheet.height);
-  st.ink = Inks{ink::text, ink::muted, ink::rule, ink::grid, Rgb{1, 1, 1}};
+  st.ink = Inks{ink::text, ink::muted, ink::rule, ink::grid, spec.sheet.press.background.value_or(Rgb{1, 1, 1})};
   st.series = default_categorical().colours;
   return st;
 }
@@ -116,6 +118,13 @@ ComposedDocument compose_document(const std::string& page_path, const std::strin
     for (auto& p : data_table_pages(*spec, plotted, style)) doc.pages.push_back(std::move(p));
   doc.info = document_info(*spec, plotted);
   doc.info.description = describe_chart(*spec, panels, axes);
+  // Last, the press sheet around each trimmed page: bleed, marks, slug.
+  const PressSpec& press = spec->sheet.press;
+  const long long today = parse_source_date_epoch(std::getenv("SOURCE_DATE_EPOCH")).value_or(std::time(nullptr));
+  for (std::size_t i = 0; i < doc.pages.size(); ++i) {
+    const std::string slug = press.slug.empty() ? std::string() : slug_line(press.slug, today, i + 1, doc.pages.size());
+    doc.pages[i] = to_press_sheet(std::move(doc.pages[i]), press, style, slug);
+  }
   return doc;
 }
 

@@ -7,6 +7,7 @@
 #include <vector>
 
 #include "base/diagnostic.h"
+#include "colour/rgb.h"
 #include "data/table.h"
 #include "scale/number_format.h"
 
@@ -23,10 +24,22 @@ struct Margins {
   double top = 0, right = 0, bottom = 0, left = 0;  ///< points
 };
 
+/// What a print shop needs around the trimmed page.
+struct PressSpec {
+  double bleed = 0;         ///< points the background runs past the trim on every side
+  bool crop_marks = false;  ///< marks outside the trim where the sheet is to be cut
+  std::string slug;         ///< job name for a slug line outside the trim; empty = none
+  std::optional<Rgb> background;  ///< paper colour printed over the trim and the bleed
+
+  /// True when the page is set on a larger press sheet.
+  bool any() const { return bleed > 0 || crop_marks || !slug.empty(); }
+};
+
 struct SheetSpec {
   std::string size_name;     ///< "A4", "letter", or "custom"
-  double width = 0, height = 0;  ///< points, after orientation
+  double width = 0, height = 0;  ///< points, after orientation: the trimmed page
   Margins margins;
+  PressSpec press;
   SourceLoc loc;
 };
 

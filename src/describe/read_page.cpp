@@ -7,6 +7,7 @@
 #include <sstream>
 
 #include "base/geometry.h"
+#include "colour/parse.h"
 #include "describe/lengths.h"
 #include "describe/schema.h"
 #include "describe/validate.h"
@@ -156,7 +157,28 @@ class Builder {
                        "the sheet is too small for the default 15mm margins",
                        "give smaller 'margins' or a larger sheet");
     }
+    if (n) s.press = press(n);
     return s;
+  }
+
+  PressSpec press(const YAML::Node& n) {
+    PressSpec p;
+    if (n["bleed"]) {
+      p.bleed = *parse_length(n["bleed"].Scalar());
+      // Print shops ask for 3 to 5 mm; more than 25 mm is a slip of the unit
+      // (common practice, recalled from printers' artwork guides).
+      if (p.bleed < 0 || p.bleed > mm_to_pt(25))
+        throw InputError(doc_.loc(n["bleed"]), "bleed must lie between 0mm and 25mm",
+                         "print shops commonly ask for 3mm");
+    }
+    if (n["crop-marks"]) p.crop_marks = n["crop-marks"].Scalar() == "true";
+    p.slug = str(n["slug"]);
+    if (n["background"]) {
+      ParsedColour c = parse_colour(n["background"].Scalar());
+      if (!c.colour) throw InputError(doc_.loc(n["background"]), c.error, c.hint);
+      p.background = c.colour;
+    }
+    return p;
   }
 
   Margins margins(const YAML::Node& n) {

@@ -60,7 +60,11 @@ struct Schema {
   NodeSpec sheet = mapping("the sheet",
       {{"size", &text, false, "A0-A6, B0-B6, letter, legal, tabloid, or \"WIDTH x HEIGHT\" with units"},
        {"orientation", &orientation, false, "portrait (default) or landscape"},
-       {"margins", &margins, false, "space between the sheet edge and the content"}},
+       {"margins", &margins, false, "space between the sheet edge and the content"},
+       {"bleed", &length, false, "print shops: how far the background runs past the trimmed edge, e.g. 3mm (the PDF gets a BleedBox)"},
+       {"crop-marks", &boolean, false, "print shops: marks outside the trimmed page showing where to cut (the PDF gets a TrimBox)"},
+       {"slug", &text, false, "print shops: a job name, printed outside the trimmed page with the date and page number"},
+       {"background", &text, false, "paper colour (#rrggbb, oklch(...), palette.k), run into the bleed"}},
       "paper size, orientation and margins");
 
   NodeSpec heading = mapping("the page heading",

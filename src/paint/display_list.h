@@ -68,6 +68,10 @@ struct DisplayPage {
   std::vector<Rect> plot_areas;
   /// Clickable areas (PDF only; drawn by nothing, placed over items drawn).
   std::vector<LinkArea> links;
+  /// Where the printed page is cut and how far its background runs past
+  /// the cut (PDF TrimBox and BleedBox, ISO 32000-1 §14.11.2); unset when
+  /// the sheet is the trimmed page itself.
+  std::optional<Rect> trim_box, bleed_box;
 
   void add(DisplayItem item) { items.push_back(std::move(item)); }
 };

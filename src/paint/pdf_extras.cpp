@@ -63,19 +63,35 @@ void link(QPDF& q, const std::vector<PageLinks>& pages) {
   }
 }
 
+// Page boxes in user space, y up from the page's foot (ISO 32000-1 §8.3.2.3).
+void set_boxes(QPDF& q, const std::vector<PageLinks>& pages) {
+  auto all = QPDFPageDocumentHelper(q).getAllPages();
+  for (std::size_t i = 0; i < pages.size() && i < all.size(); ++i) {
+    QPDFObjectHandle page = all[i].getObjectHandle();
+    const double h = pages[i].height;
+    auto box = [h](const Rect& r) {
+      return QPDFObjectHandle::newArray(QPDFObjectHandle::Rectangle(r.left(), h - r.bottom(), r.right(), h - r.top()));
+    };
+    if (pages[i].trim_box) page.replaceKey("/TrimBox", box(*pages[i].trim_box));
+    if (pages[i].bleed_box) page.replaceKey("/BleedBox", box(*pages[i].bleed_box));
+  }
+}
+
 }  // namespace
 
 std::string add_pdf_extras(const std::string& pdf, const std::vector<EmbeddedFile>& files,
                            const std::vector<PageLinks>& pages) {
   bool any_link = false;
-  for (const auto& p : pages) any_link = any_link || !p.links.empty();
-  if (files.empty() && !any_link) return pdf;
+  bool any_box = false;
+  for (const auto& p : pages) any_link = any_link || !p.links.empty(), any_box = any_box || p.trim_box || p.bleed_box;
+  if (files.empty() && !any_link && !any_box) return pdf;
   try {
     QPDF q;
     q.setSuppressWarnings(true);
     q.processMemoryFile("forme output", pdf.data(), pdf.size());
     if (!files.empty()) embed(q, files);
     link(q, pages);
+    set_boxes(q, pages);
     QPDFWriter w(q);
     w.setOutputMemory();
     w.setDeterministicID(true);       // /ID from the content, not the time

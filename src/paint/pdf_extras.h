@@ -9,10 +9,13 @@
 ///    specification (§7.11.3) listed in the catalog's /Names /EmbeddedFiles
 ///    name tree (§7.7.4) and in the catalog's /AF array with relationship
 ///    /Data (ISO 32000-2 §14.13: associated files holding the data a page shows);
+///  - each page's trim and bleed, when it has them, become /TrimBox and
+///    /BleedBox rectangles (§14.11.2) in the page dictionary;
 ///  - each link becomes a /Link annotation (§12.5.6.5) with a URI action
 ///    (§12.6.4.7) and no border, in the page's /Annots array.
 /// The file is rewritten whole, with no dates and a document /ID computed
 /// from its content, so the same page still gives the same bytes.
+#include <optional>
 #include <string>
 #include <vector>
 
@@ -21,11 +24,12 @@
 
 namespace forme {
 
-/// Links for one page: the page's height (to turn y-down points into PDF
-/// user space) and its areas.
+/// Links and print boxes for one page: the page's height (to turn y-down
+/// points into PDF user space), its link areas, and where it is trimmed.
 struct PageLinks {
   double height = 0;
   std::vector<LinkArea> links;
+  std::optional<Rect> trim_box, bleed_box;  ///< written as /TrimBox and /BleedBox (ISO 32000-1 §14.11.2)
 };
 
 /// Returns `pdf` with `files` embedded and `pages[i]`'s links on page i.

@@ -37,7 +37,7 @@ class PdfPainter final : public Painter {
     } else {
       cairo_pdf_surface_set_size(surface_, page.width, page.height);
     }
-    links_.push_back(PageLinks{page.height, page.links});
+    links_.push_back(PageLinks{page.height, page.links, page.trim_box, page.bleed_box});
     draw_page(cr_, page);
     cairo_show_page(cr_);
     check_cairo(cairo_status(cr_), "PDF page");
