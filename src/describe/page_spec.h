@@ -7,6 +7,7 @@
 #include <vector>
 
 #include "base/diagnostic.h"
+#include "base/geometry.h"
 #include "colour/rgb.h"
 #include "data/table.h"
 #include "scale/number_format.h"
@@ -72,6 +73,22 @@ struct ReferenceLine {
   SourceLoc loc;
 };
 
+/// A note attached by a leader line to something in a panel: a point, a
+/// category's bar, or a stretch of x drawn as a light band.
+struct CalloutSpec {
+  enum class Target { point, category, span };
+  enum class Corner { none, upper_left, upper_right, lower_left, lower_right };
+  std::string text;
+  double width = 0;  ///< wrap width in points; 0 = automatic
+  Target target = Target::point;
+  Located x, y;            ///< point target (x may be a date or a category)
+  Located category;        ///< bar target
+  Located from, to;        ///< span target along x
+  Corner corner = Corner::none;      ///< pinned to a corner of the plot
+  std::optional<Point> offset;       ///< pinned: note centre from the target, points (right, up)
+  SourceLoc loc;
+};
+
 enum class Trend { none, line, line_with_equation };
 enum class AspectRule { fill, bank_median_slope, bank_orientation };
 
@@ -87,6 +104,9 @@ struct PanelSpec {
   Trend trend = Trend::none;
   AspectRule aspect = AspectRule::fill;
   bool value_labels = false;  ///< write values on bars
+  Located label_points_by;    ///< dot panels: column whose text names each point
+  Located label_priority;     ///< number column: higher values are labelled first
+  std::vector<CalloutSpec> callouts;
   SourceLoc aspect_loc;
   SourceLoc loc;  ///< the panel mapping (or grid) this came from
 };

@@ -314,6 +314,15 @@ class Builder {
       for (const auto& r : refs) p.references.push_back(reference(r));
     }
     if (auto v = n["value-labels"]) p.value_labels = v.Scalar() == "true";
+    if (n["label-points-by"]) p.label_points_by = located(n["label-points-by"]);
+    if (n["label-priority"]) p.label_priority = located(n["label-priority"]);
+    if (!p.label_priority.empty() && p.label_points_by.empty())
+      throw InputError(p.label_priority.loc, "'label-priority' orders point names, but the panel names no points",
+                       "add 'label-points-by:' naming the column whose text labels each point");
+    if (auto list = n["callouts"]) {
+      p.callouts.clear();
+      for (const auto& c : list) p.callouts.push_back(callout(c));
+    }
     if (auto t = n["trend"])
       p.trend = t.Scalar() == "line" ? Trend::line : t.Scalar() == "line-with-equation" ? Trend::line_with_equation : Trend::none;
     if (auto a = n["aspect"]) {
@@ -358,6 +367,56 @@ class Builder {
     if (t.kind == TransformSpec::Kind::difference && t.minus.empty())
       throw InputError(t.loc, "a difference needs the series to subtract", "add 'minus:' naming a series");
     return t;
+  }
+
+  // A callout names exactly one target: a point (x and y), a category, or
+  // a stretch of x (from and to).
+  CalloutSpec callout(const YAML::Node& n) {
+    CalloutSpec c;
+    c.loc = doc_.loc(n);
+    c.text = str(n["text"]);
+    if (c.text.empty()) throw InputError(c.loc, "a callout needs its 'text'");
+    if (n["x"]) c.x = located(n["x"]);
+    if (n["y"]) c.y = located(n["y"]);
+    if (n["category"]) c.category = located(n["category"]);
+    if (n["from"]) c.from = located(n["from"]);
+    if (n["to"]) c.to = located(n["to"]);
+    const bool point = !c.x.empty() || !c.y.empty(), cat = !c.category.empty(), span = !c.from.empty() || !c.to.empty();
+    if (point + cat + span != 1)
+      throw InputError(c.loc, "a callout points at exactly one thing",
+                       "give 'x' and 'y' (a point), 'category' (a bar), or 'from' and 'to' (a stretch of x)");
+    if (point && (c.x.empty() || c.y.empty()))
+      throw InputError(c.loc, "a callout at a point needs both 'x' and 'y'");
+    if (span && (c.from.empty() || c.to.empty()))
+      throw InputError(c.loc, "a callout on a stretch of x needs both 'from' and 'to'");
+    c.target = point ? CalloutSpec::Target::point : cat ? CalloutSpec::Target::category : CalloutSpec::Target::span;
+    if (auto w = n["width"]) {
+      c.width = *parse_length(w.Scalar());
+      if (c.width < 18) throw InputError(doc_.loc(w), "a callout narrower than 18pt cannot hold a word", "use 25mm or more");
+    }
+    if (auto k = n["corner"]) {
+      const std::string& v = k.Scalar();
+      c.corner = v == "upper-left"    ? CalloutSpec::Corner::upper_left
+                 : v == "upper-right" ? CalloutSpec::Corner::upper_right
+                 : v == "lower-left"  ? CalloutSpec::Corner::lower_left
+                                      : CalloutSpec::Corner::lower_right;
+    }
+    if (auto o = n["offset"]) {
+      std::istringstream words(o.Scalar());
+      std::vector<double> v;
+      std::string w;
+      while (words >> w) {
+        auto len = parse_length(w);
+        if (!len) throw InputError(doc_.loc(o), "offset '" + w + "' is not a length", "write lengths with units, e.g. \"20mm 8mm\"");
+        v.push_back(*len);
+      }
+      if (v.size() != 2)
+        throw InputError(doc_.loc(o), "an offset takes two lengths", "right then up from the target, e.g. \"20mm -8mm\"");
+      c.offset = Point{v[0], v[1]};
+    }
+    if (c.offset && c.corner != CalloutSpec::Corner::none)
+      throw InputError(doc_.loc(n["offset"]), "a callout is pinned by 'corner' or by 'offset', not both");
+    return c;
   }
 
   ReferenceLine reference(const YAML::Node& n) {

@@ -144,6 +144,19 @@ struct Schema {
     n.refused = "a second value axis lets the author choose where two lines cross; draw two panels, aligned on the same x, instead";
     return n;
   }();
+  NodeSpec corner = choice("upper-left, upper-right, lower-left or lower-right",
+                          {"upper-left", "upper-right", "lower-left", "lower-right"});
+  NodeSpec callout = mapping("a callout",
+      {{"text", &text, true, "the note, word-wrapped to 'width'"},
+       {"x", &text, false, "with 'y': the point the note points at (a number, date or category)"},
+       {"y", &text, false, "with 'x': the point the note points at"},
+       {"category", &text, false, "the bar (category) the note points at"},
+       {"from", &text, false, "with 'to': a stretch of x, drawn as a light band, that the note points at"},
+       {"to", &text, false, "with 'from': the end of the stretch of x"},
+       {"width", &length, false, "width the note is wrapped to (default: about 16 times the type size)"},
+       {"corner", &corner, false, "pin the note to this corner of the plot instead of letting forme place it"},
+       {"offset", &text, false, "pin the note's centre this far from its target: two lengths, right and up, e.g. \"20mm 8mm\""}});
+  NodeSpec callouts = list_of("a list of callouts", &callout);
   NodeSpec panel = mapping("a panel",
       {{"kind", &kind, false, "line, vertical-bar, horizontal-bar or dot"},
        {"table", &text, false, "name of a table under 'tables'"},
@@ -169,6 +182,9 @@ struct Schema {
        {"trend", &trend, false, "dot panels: least-squares trend line, optionally with its equation"},
        {"aspect", &aspect, false, "line panels: fill the cell, or bank the lines to 45 degrees"},
        {"value-labels", &boolean, false, "bar panels: write each value inside its bar where it fits, else just beyond it"},
+       {"label-points-by", &text, false, "dot panels: a column whose text names each point; names that find no room are left out with a warning"},
+       {"label-priority", &text, false, "with label-points-by: a number column; points with higher values are named first"},
+       {"callouts", &callouts, false, "notes joined by a leader line to a point, a bar or a stretch of x"},
        {"y-right", &refused, false, "not available: forme refuses a second value axis"}});
   NodeSpec panels = list_of("a list of panels", &panel);
 

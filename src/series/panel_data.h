@@ -25,6 +25,14 @@ struct TransformStatement {
   bool keeps_unit = false; ///< the values keep the data's unit (a difference does)
 };
 
+/// A name to write beside one drawn point (dot panels with label-points-by).
+struct PointName {
+  std::size_t series = 0, point = 0;  ///< which point: series index, index within it
+  std::string text;
+  double priority = 1;  ///< > 0; higher is named first
+  SourceLoc loc;        ///< the table row it came from
+};
+
 struct PanelData {
   const PanelSpec* spec = nullptr;
   std::string title;
@@ -40,6 +48,7 @@ struct PanelData {
   std::string table;
   std::vector<std::size_t> rows;
   TransformStatement transform;  ///< what was done to the values, if anything
+  std::vector<PointName> point_names;  ///< with label-points-by, in table order
 };
 
 }  // namespace forme

@@ -56,6 +56,25 @@ bool y_is_category(const PanelSpec& p, const Column& y) {
   return p.kind == ChartKind::horizontal_bar || (p.kind == ChartKind::dot && y.type == ColumnType::text);
 }
 
+// The placer needs priorities above zero; the author's numbers may be any
+// sign or size, so only their order is kept: 1 for the lowest (or a missing
+// cell) up to 2 for the highest.
+void rank_priorities(std::vector<PointName>& names) {
+  std::vector<double> v;
+  for (const auto& n : names)
+    if (!std::isnan(n.priority)) v.push_back(n.priority);
+  std::sort(v.begin(), v.end());
+  v.erase(std::unique(v.begin(), v.end()), v.end());
+  for (auto& n : names) {
+    if (std::isnan(n.priority) || v.size() < 2) {
+      n.priority = 1;
+      continue;
+    }
+    const auto at = std::lower_bound(v.begin(), v.end(), n.priority) - v.begin();
+    n.priority = 1 + static_cast<double>(at) / static_cast<double>(v.size() - 1);
+  }
+}
+
 PanelData build_panel(const PanelSpec& p, const Table& t, const std::vector<std::size_t>& rows,
                       std::string title) {
   if (p.x.empty()) throw InputError(p.loc, "panel has no 'x' column", "name the column for the horizontal position");
@@ -63,6 +82,14 @@ PanelData build_panel(const PanelSpec& p, const Table& t, const std::vector<std:
   const Column& xc = find_column(t, p.x, "x");
   const Column& yc = find_column(t, p.y, "y");
   const Column* sc = p.series_by.empty() ? nullptr : &find_column(t, p.series_by, "series-by");
+  const Column* names = p.label_points_by.empty() ? nullptr : &find_column(t, p.label_points_by, "label-points-by");
+  const Column* ranks = p.label_priority.empty() ? nullptr : &find_column(t, p.label_priority, "label-priority");
+  if (names && p.kind != ChartKind::dot)
+    throw InputError(p.label_points_by.loc, "'label-points-by' names the points of dot panels only",
+                     "use 'kind: dot', or name lines and bars with 'series-by'");
+  if (ranks && ranks->type != ColumnType::number)
+    throw InputError(p.label_priority.loc, "column '" + ranks->name + "' holds text, but 'label-priority' needs numbers",
+                     "higher numbers are named first; declare its type under the table's 'types' if it was misread");
 
   PanelData d;
   d.spec = &p;
@@ -98,6 +125,9 @@ PanelData build_panel(const PanelSpec& p, const Table& t, const std::vector<std:
     double x = d.x_kind == AxisKind::category ? category(xc.text[r]) : xc.values[r];
     double y = d.y_kind == AxisKind::category ? category(yc.text[r]) : yc.values[r];
     if (std::isnan(x) || std::isnan(y)) continue;  // missing cell: a gap, not a zero
+    if (names && !names->text[r].empty())
+      d.point_names.push_back({it->second, s.x.size(), names->text[r], ranks ? ranks->values[r] : 0,
+                               SourceLoc{t.path, r < t.row_lines.size() ? t.row_lines[r] : 0, 1}});
     s.x.push_back(x);
     s.y.push_back(y);
     ++d.rows_used;
@@ -118,6 +148,7 @@ PanelData build_panel(const PanelSpec& p, const Table& t, const std::vector<std:
       s = std::move(sorted);
     }
   d.transform = apply_transform(p.transform, d);
+  rank_priorities(d.point_names);
   return d;
 }
 
