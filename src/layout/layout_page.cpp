@@ -4,11 +4,13 @@
 #include <cmath>
 
 #include "layout/aspect.h"
+#include "layout/callout_targets.h"
 #include "layout/axis_marks.h"
 #include "layout/guides.h"
 #include "layout/furniture.h"
 #include "layout/grid_shape.h"
 #include "layout/marks/marks.h"
+#include "layout/movable_text.h"
 #include "layout/text_items.h"
 
 namespace forme {
@@ -88,8 +90,20 @@ GridMeasure measure_grid(const std::vector<PanelData>& panels, const std::vector
   // centred on the plot's top edge.
   m.top = (any_title ? title_line + st.base * 0.15 : 0) + (any_ytitle ? line : 0) + line * 0.55 + st.base * 0.15;
   m.x_title = any_xtitle ? line + st.base * 0.3 : 0;
-  m.right = std::max(marks_right_inset(panels.front().kind, panels, st), last_x_half) + st.base * 0.2;
+  // Every panel gets the same inset, so it must hold the widest any kind on the page needs.
+  double inset = 0;
+  for (const auto& p : panels) inset = std::max(inset, marks_right_inset(p.kind, panels, st));
+  m.right = std::max(inset, last_x_half) + st.base * 0.2;
   return m;
+}
+
+// A stretch of x a callout points at: a pale band the height of the plot.
+void draw_callout_band(const Rect& band, DisplayPage& page) {
+  PathItem p;
+  p.points = {{band.x, band.y}, {band.right(), band.y}, {band.right(), band.bottom()}, {band.x, band.bottom()}};
+  p.closed = true;
+  p.fill = rgb8(0xf3, 0xec, 0xd9);  // a warm pale sand, lighter than any series colour
+  page.add(std::move(p));
 }
 
 }  // namespace
@@ -165,6 +179,7 @@ DisplayPage layout_page(const PageSpec& spec, const std::vector<PanelData>& pane
     return false;
   }();
 
+  std::vector<PanelMovables> movables;
   for (std::size_t i = 0; i < panels.size(); ++i) {
     const int c = static_cast<int>(i) % g.columns, r = static_cast<int>(i) / g.columns;
     double x = area.x, y = area.y;
@@ -190,6 +205,17 @@ DisplayPage layout_page(const PageSpec& spec, const std::vector<PanelData>& pane
       page.add(text_at(std::move(t), cell_left, ty + asc, Align::left, st.ink.muted, TextRole::axis_title));
     }
 
+    PanelMovables& moving = movables.emplace_back();
+    moving.plot = f.plot;
+    for (const CalloutSpec& cs : panels[i].spec->callouts) {
+      const CalloutTarget t = resolve_callout_target(cs, panels[i], f);
+      if (t.band) draw_callout_band(*t.band, page);  // behind the grid and the data
+      moving.callouts.push_back({&cs, t.anchor});
+    }
+    for (const PointName& n : panels[i].point_names) {
+      const Series& s = panels[i].series[n.series];
+      moving.names.push_back({{f.px(s.x[n.point]), f.py(s.y[n.point])}, st.dot_radius() * 1.2, n.text, n.priority, n.loc});
+    }
     draw_axis_backdrop(f, st, page);
     const MarkContext ctx{panels[i], f, st, colours, name_series};
     draw_marks(ctx, page);
@@ -203,6 +229,8 @@ DisplayPage layout_page(const PageSpec& spec, const std::vector<PanelData>& pane
                        Align::centre, st.ink.muted, TextRole::axis_title));
     }
   }
+  // 6. Movable text last, when every fixed text and mark on the page is known.
+  place_movable_text(movables, st, page, warnings);
   return page;
 }
 

@@ -36,7 +36,10 @@ struct CircleItem {
 };
 
 /// What a piece of text is for; tests and the overlap check use it.
-enum class TextRole { title, standfirst, panel_title, axis_title, tick_label, series_label, value_label, note, source };
+enum class TextRole {
+  title, standfirst, panel_title, axis_title, tick_label, series_label, value_label, note, source,
+  point_label, callout
+};
 
 struct TextItem {
   ShapedText text;
@@ -66,6 +69,9 @@ struct DisplayPage {
   /// Where layout put each panel's plot area, in panel order. Painters
   /// ignore it; checks and tests read it.
   std::vector<Rect> plot_areas;
+  /// Where data is drawn (dots, bars, points sampled along lines), so that
+  /// text placed later can keep clear of it. Painters ignore it.
+  std::vector<Rect> data_marks;
   /// Clickable areas (PDF only; drawn by nothing, placed over items drawn).
   std::vector<LinkArea> links;
   /// Where the printed page is cut and how far its background runs past

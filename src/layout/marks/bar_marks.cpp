@@ -47,6 +47,7 @@ void draw_vertical_bar_marks(const MarkContext& ctx, DisplayPage& page) {
       double left = f.px(series[k].x[i]) - band / 2 + each * static_cast<double>(k);
       const double end = f.py(series[k].y[i]);
       page.add(box(left, zero, left + each, end, colour));
+      page.data_marks.push_back({left, std::min(zero, end), each, std::abs(end - zero)});
       if (ctx.data.spec->value_labels)
         add_value_label({{left, std::min(zero, end), each, std::abs(end - zero)}, series[k].y[i], colour, false,
                          series[k].y[i] >= 0 ? 1 : -1},
@@ -84,6 +85,7 @@ void draw_horizontal_bar_marks(const MarkContext& ctx, DisplayPage& page) {
       double top = f.py(series[k].y[i]) - band / 2 + each * static_cast<double>(k);
       const double end = f.px(series[k].x[i]);
       page.add(box(zero, top, end, top + each, colour));
+      page.data_marks.push_back({std::min(zero, end), top, std::abs(end - zero), each});
       ValuePlacement placed_value = ValuePlacement::inside;
       if (ctx.data.spec->value_labels)
         placed_value = add_value_label({{std::min(zero, end), top, std::abs(end - zero), each}, series[k].x[i], colour,

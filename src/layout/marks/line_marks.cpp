@@ -42,6 +42,7 @@ void draw_line_marks(const MarkContext& ctx, DisplayPage& page) {
     // more than 0.05 pt, far below what an eye resolves on paper.
     path.points = simplify_polyline(path.points, 0.05);
     drawn.push_back(path.points);
+    note_line_marks(path.points, page);
     if (path.points.size() == 1) {
       page.add(CircleItem{path.points[0], st.dot_radius(), colour, std::nullopt});
     } else if (!path.points.empty()) {

@@ -1,6 +1,7 @@
 #include "layout/marks/marks.h"
 
 #include <algorithm>
+#include <cmath>
 
 #include "text/shaped_text.h"
 
@@ -15,6 +16,24 @@ double marks_right_inset(ChartKind kind, const std::vector<PanelData>& panels, c
         widest = std::max(widest, shape_text(s.name, style.fonts.regular, style.label_size()).width);
   // Room for a short leader, then the label.
   return widest > 0 ? widest + style.base * 1.0 : 0;
+}
+
+void note_line_marks(const std::vector<Point>& line, DisplayPage& page) {
+  double length = 0;
+  for (std::size_t i = 1; i < line.size(); ++i) length += std::hypot(line[i].x - line[i - 1].x, line[i].y - line[i - 1].y);
+  // 1.5 pt apart is less than any label is tall (6 pt text at least); very
+  // long wiggly lines are sampled more coarsely so the list stays bounded.
+  const double step = std::max(1.5, length / 20000);
+  for (std::size_t i = 0; i < line.size(); ++i) {
+    page.data_marks.push_back({line[i].x, line[i].y, 0, 0});
+    if (i + 1 == line.size()) break;
+    const double dx = line[i + 1].x - line[i].x, dy = line[i + 1].y - line[i].y;
+    const int n = static_cast<int>(std::hypot(dx, dy) / step);
+    for (int k = 1; k <= n; ++k) {
+      const double t = static_cast<double>(k) / (n + 1);
+      page.data_marks.push_back({line[i].x + dx * t, line[i].y + dy * t, 0, 0});
+    }
+  }
 }
 
 void draw_marks(const MarkContext& ctx, DisplayPage& page) {

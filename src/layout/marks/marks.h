@@ -26,6 +26,10 @@ struct MarkContext {
 /// labels on the right), given the page's series names.
 double marks_right_inset(ChartKind kind, const std::vector<PanelData>& panels, const PageStyle& style);
 
+/// Records a drawn line in page.data_marks as points along it, close enough
+/// together that no label box can sit across the line between two of them.
+void note_line_marks(const std::vector<Point>& line, DisplayPage& page);
+
 /// Draws the data of one panel.
 void draw_marks(const MarkContext& ctx, DisplayPage& page);
 

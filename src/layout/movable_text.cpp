@@ -1,0 +1,157 @@
+#include "layout/movable_text.h"
+
+#include <algorithm>
+#include <cmath>
+
+#include "layout/marks/marks.h"
+#include "place/callout_spot.h"
+#include "place/point_labels.h"
+#include "text/wrap.h"
+
+namespace forme {
+
+namespace {
+
+// Every piece of text on the page so far, grown by `gap` so that nothing
+// placed against it touches it.
+std::vector<Rect> text_boxes(const DisplayPage& page, double gap) {
+  std::vector<Rect> out;
+  for (const auto& item : page.items)
+    if (const auto* t = std::get_if<TextItem>(&item)) out.push_back(t->box().inflate(gap));
+  return out;
+}
+
+void draw_leader(Point from, Point to, const Stroke& stroke, DisplayPage& page) {
+  PathItem p;
+  p.points = {from, to};
+  p.stroke = stroke;
+  page.add(std::move(p));
+}
+
+// The leader starts at the rim of a dot rather than its centre.
+Point off_rim(Point centre, Point toward, double radius) {
+  const double dx = toward.x - centre.x, dy = toward.y - centre.y, d = std::hypot(dx, dy);
+  if (d <= radius) return centre;
+  return {centre.x + dx / d * radius, centre.y + dy / d * radius};
+}
+
+Rect pinned_box(const CalloutSpec& c, Point target, const Rect& plot, double w, double h, double pad) {
+  using C = CalloutSpec::Corner;
+  if (c.offset) return {target.x + c.offset->x - w / 2, target.y - c.offset->y - h / 2, w, h};
+  const double l = plot.left() + pad, r = plot.right() - pad - w, t = plot.top() + pad, b = plot.bottom() - pad - h;
+  switch (c.corner) {
+    case C::upper_left: return {l, t, w, h};
+    case C::upper_right: return {r, t, w, h};
+    case C::lower_left: return {l, b, w, h};
+    case C::lower_right:
+    case C::none: break;
+  }
+  return {r, b, w, h};
+}
+
+void place_callouts(const PanelMovables& p, const PageStyle& st, DisplayPage& page, std::vector<Leader>& leaders,
+                    DiagnosticSink& warnings) {
+  const double pad = st.base * 0.3, gap = st.base * 0.15;
+  const double size = st.label_size();
+  const double lh = PageStyle::line_height(st.fonts.regular, size);
+  for (const CalloutRequest& req : p.callouts) {
+    const CalloutSpec& c = *req.spec;
+    const double width = c.width > 0 ? c.width : st.base * 16;
+    std::vector<ShapedText> lines = wrap_text(c.text, st.fonts.regular, size, width - 2 * pad);
+    double w = 0;
+    for (const auto& l : lines) w = std::max(w, l.width);
+    w += 2 * pad;
+    const double h = static_cast<double>(lines.size()) * lh + 2 * pad;
+    const std::vector<Rect> obstacles = text_boxes(page, gap);
+    Rect box;
+    if (c.offset || c.corner != CalloutSpec::Corner::none) {
+      box = pinned_box(c, req.target, p.plot, w, h, pad);
+      for (const Rect& o : obstacles)
+        if (o.overlaps(box)) {
+          warnings.warn(c.loc, "the callout's pinned place covers other text",
+                        "move it with 'offset' or 'corner', or leave both out and forme finds a free place");
+          break;
+        }
+    } else {
+      CalloutSearch search{p.plot, st.base * 0.4, st.base * 0.8, 24};
+      auto spot = find_callout_spot(req.target, w, h, search, obstacles, page.data_marks, leaders);
+      if (!spot) {
+        warnings.warn(c.loc, "no free room in the panel for the callout '" + lines.front().utf8 + "…'; it is left out",
+                      "shorten it, give it a smaller 'width', or pin it with 'corner' or 'offset'");
+        continue;
+      }
+      box = spot->box;
+    }
+    // Paper behind the note keeps it readable where it must cover data.
+    PathItem backing;
+    backing.points = {{box.x, box.y}, {box.right(), box.y}, {box.right(), box.bottom()}, {box.x, box.bottom()}};
+    backing.closed = true;
+    backing.fill = st.ink.paper;
+    page.add(std::move(backing));
+    const Point end = nearest_point_of(box.inset(pad * 0.5), req.target);
+    if (std::hypot(end.x - req.target.x, end.y - req.target.y) > st.base * 0.3) {
+      draw_leader(req.target, end, Stroke{st.ink.text, st.rule_width() * 1.5, {}, true}, page);
+      leaders.push_back({req.target, end});
+      note_line_marks({req.target, end}, page);
+    }
+    page.add(CircleItem{req.target, st.rule_width() * 2.2, st.ink.text, std::nullopt});
+    double top = box.y + pad;
+    for (auto& l : lines) {
+      const double asc = l.ascent;
+      page.add(TextItem{std::move(l), {box.x + pad, top + asc}, st.ink.text, TextRole::callout});
+      top += lh;
+    }
+    page.data_marks.push_back(box);
+  }
+}
+
+void place_point_names(const PanelMovables& p, std::size_t panel, const PageStyle& st, DisplayPage& page,
+                       DiagnosticSink& warnings) {
+  if (p.names.empty()) return;
+  const double pad = st.base * 0.1, gap = st.base * 0.15;
+  // Names are set a step smaller than tick labels (never below 6 pt), so
+  // more of them find room beside their dots.
+  const double size = st.note_size();
+  PlacementProblem problem;
+  problem.area = p.plot;
+  problem.obstacles = text_boxes(page, gap);
+  for (const Rect& m : page.data_marks)
+    if (m.overlaps(p.plot.inflate(1)) || p.plot.contains({m.x, m.y})) problem.marks.push_back(m);
+  std::vector<ShapedText> texts;
+  double radius = 0;
+  for (const auto& n : p.names) {
+    texts.push_back(shape_text(n.text, st.fonts.regular, size));
+    problem.labels.push_back({n.anchor, texts.back().width + 2 * pad, texts.back().height() + 2 * pad, n.priority,
+                              IfUnplaced::leader});
+    radius = std::max(radius, n.radius);
+  }
+  PlacementOptions options;
+  options.offset = radius;
+  options.seed = 1 + panel;  // fixed: the same page always comes out the same
+  options.leader_rings = 4;
+  const PlacementResult r = place_labels_annealing(problem, options);
+  const Stroke leader_stroke{st.ink.muted, st.rule_width() * 1.5, {}, true};
+  for (std::size_t i = 0; i < p.names.size(); ++i) {
+    const LabelPlacement& lp = r.labels[i];
+    if (!lp.placed) continue;
+    if (lp.leader) draw_leader(off_rim(p.names[i].anchor, lp.leader->to, p.names[i].radius), lp.leader->to, leader_stroke, page);
+    const double asc = texts[i].ascent;
+    page.add(TextItem{std::move(texts[i]), {lp.box.x + pad, lp.box.y + pad + asc}, st.ink.text, TextRole::point_label});
+  }
+  for (int i : r.left_out) {
+    const PointNameRequest& n = p.names[static_cast<std::size_t>(i)];
+    warnings.warn(n.loc, "point name '" + n.text + "' left out: no free room near its point",
+                  "give it a higher 'label-priority', shorten the names, or give the panel more room");
+  }
+}
+
+}  // namespace
+
+void place_movable_text(const std::vector<PanelMovables>& panels, const PageStyle& st, DisplayPage& page,
+                        DiagnosticSink& warnings) {
+  std::vector<Leader> leaders;
+  for (const auto& p : panels) place_callouts(p, st, page, leaders, warnings);
+  for (std::size_t i = 0; i < panels.size(); ++i) place_point_names(panels[i], i, st, page, warnings);
+}
+
+}  // namespace forme
