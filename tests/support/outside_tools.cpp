@@ -110,6 +110,12 @@ std::vector<PdfPageWords> pdf_words(const std::string& pdf) {
   return parse_bbox(r.out, "word");
 }
 
+std::vector<PdfPageWords> pdf_layout_words(const std::string& pdf) {
+  auto r = run("pdftotext -bbox-layout '" + pdf + "' -");
+  if (r.exit_code != 0) throw std::runtime_error("pdftotext failed: " + r.err);
+  return parse_bbox(r.out, "word");
+}
+
 std::vector<PdfPageWords> pdf_lines(const std::string& pdf) {
   auto r = run("pdftotext -bbox-layout '" + pdf + "' -");
   if (r.exit_code != 0) throw std::runtime_error("pdftotext failed: " + r.err);

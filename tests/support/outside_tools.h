@@ -55,6 +55,10 @@ std::vector<PdfPageWords> pdf_words(const std::string& pdf);
 /// Lines of every page, via `pdftotext -bbox-layout` (each line's box and text).
 std::vector<PdfPageWords> pdf_lines(const std::string& pdf);
 
+/// Words of every page, via `pdftotext -bbox-layout` (each word's box, as
+/// laid out into lines and blocks).
+std::vector<PdfPageWords> pdf_layout_words(const std::string& pdf);
+
 /// Every page description under layouts/.
 std::vector<std::string> layout_pages();
 
