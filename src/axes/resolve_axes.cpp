@@ -2,6 +2,7 @@
 #include <charconv>
 #include <cmath>
 #include <limits>
+#include <map>
 
 #include "axes/axis.h"
 #include "data/dates.h"
@@ -49,7 +50,18 @@ struct Extent {
   bool empty() const { return lo > hi; }
 };
 
-bool bars(ChartKind k) { return k == ChartKind::vertical_bar || k == ChartKind::horizontal_bar; }
+bool bars(ChartKind k) {
+  return k == ChartKind::vertical_bar || k == ChartKind::horizontal_bar || k == ChartKind::stacked_bar;
+}
+
+// A stack reaches the sum of its positive segments above zero and of its
+// negative ones below.
+void add_stack_ends(const PanelData& p, Extent& e) {
+  std::map<double, std::pair<double, double>> ends;
+  for (const auto& s : p.series)
+    for (std::size_t i = 0; i < s.x.size(); ++i) (s.y[i] >= 0 ? ends[s.x[i]].first : ends[s.x[i]].second) += s.y[i];
+  for (const auto& [x, ud] : ends) e.add(ud.first), e.add(ud.second);
+}
 
 // A value the author wrote for an axis end, in the axis's units.
 double author_value(const Located& v, AxisKind kind) {
@@ -160,6 +172,7 @@ Axis build_axis(const std::vector<const PanelData*>& panels, bool is_x, Diagnost
   for (const PanelData* p : panels) {
     for (const auto& s : p->series)
       for (double v : is_x ? s.x : s.y) e.add(v);
+    if (p->kind == ChartKind::stacked_bar && !is_x) add_stack_ends(*p, e);
     // Bar length encodes the value, so the value axis of bars shows zero.
     const bool value_axis = is_x ? p->y_kind == AxisKind::category : p->x_kind == AxisKind::category ||
                                                                         p->x_kind == AxisKind::date;

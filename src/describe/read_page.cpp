@@ -265,6 +265,7 @@ class Builder {
     if (k == "vertical-bar") return ChartKind::vertical_bar;
     if (k == "horizontal-bar") return ChartKind::horizontal_bar;
     if (k == "dot") return ChartKind::dot;
+    if (k == "stacked-bar") return ChartKind::stacked_bar;
     return ChartKind::line;
   }
 

@@ -103,7 +103,7 @@ struct Schema {
        {"order", &text_list, false, "order of the one-panel-per values"},
        {"gap", &length, false, "space between panels"}});
 
-  NodeSpec kind = choice("a chart kind", {"line", "vertical-bar", "horizontal-bar", "dot"});
+  NodeSpec kind = choice("a chart kind", {"line", "vertical-bar", "horizontal-bar", "dot", "stacked-bar"});
   NodeSpec format_style = choice("a number style", {"plain", "percent", "fraction-percent", "si"});
   NodeSpec format_map = mapping("a number format",
       {{"style", &format_style, false, "plain, percent (values in %), fraction-percent (0.25 = 25%), si (k, M, G)"},
@@ -158,7 +158,7 @@ struct Schema {
        {"offset", &text, false, "pin the note's centre this far from its target: two lengths, right and up, e.g. \"20mm 8mm\""}});
   NodeSpec callouts = list_of("a list of callouts", &callout);
   NodeSpec panel = mapping("a panel",
-      {{"kind", &kind, false, "line, vertical-bar, horizontal-bar or dot"},
+      {{"kind", &kind, false, "line, vertical-bar, horizontal-bar, dot, or stacked-bar (one upright bar per category, a segment per series)"},
        {"table", &text, false, "name of a table under 'tables'"},
        {"x", &text, false, "column for the horizontal position (categories for vertical bars)"},
        {"y", &text, false, "column for the vertical position (categories for horizontal bars and dots)"},
@@ -181,7 +181,7 @@ struct Schema {
        {"references", &references, false, "reference lines: targets, thresholds, averages"},
        {"trend", &trend, false, "dot panels: least-squares trend line, optionally with its equation"},
        {"aspect", &aspect, false, "line panels: fill the cell, or bank the lines to 45 degrees"},
-       {"value-labels", &boolean, false, "bar panels: write each value inside its bar where it fits, else just beyond it"},
+       {"value-labels", &boolean, false, "bar panels: write each value inside its bar where it fits, else just beyond it; stacked bars: inside each segment where it fits, else left out with a warning"},
        {"label-points-by", &text, false, "dot panels: a column whose text names each point; names that find no room are left out with a warning"},
        {"label-priority", &text, false, "with label-points-by: a number column; points with higher values are named first"},
        {"callouts", &callouts, false, "notes joined by a leader line to a point, a bar or a stretch of x"},

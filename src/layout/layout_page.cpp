@@ -217,7 +217,7 @@ DisplayPage layout_page(const PageSpec& spec, const std::vector<PanelData>& pane
       moving.names.push_back({{f.px(s.x[n.point]), f.py(s.y[n.point])}, st.dot_radius() * 1.2, n.text, n.priority, n.loc});
     }
     draw_axis_backdrop(f, st, page);
-    const MarkContext ctx{panels[i], f, st, colours, name_series};
+    const MarkContext ctx{panels[i], f, st, colours, name_series, &warnings};
     draw_marks(ctx, page);
     draw_trend_lines(ctx, page);
     draw_reference_lines(ctx, page);

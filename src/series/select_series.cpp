@@ -49,7 +49,7 @@ AxisKind kind_of(const Column& c) {
 // and dot strips. Line charts have none.
 // Bars over dates stand on a time axis, one bar per period.
 bool x_is_category(const PanelSpec& p, const Column& x) {
-  if (p.kind == ChartKind::vertical_bar) return x.type != ColumnType::date;
+  if (p.kind == ChartKind::vertical_bar || p.kind == ChartKind::stacked_bar) return x.type != ColumnType::date;
   return p.kind != ChartKind::horizontal_bar && x.type == ColumnType::text;
 }
 bool y_is_category(const PanelSpec& p, const Column& y) {

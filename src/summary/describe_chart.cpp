@@ -15,6 +15,7 @@ const char* kind_name(ChartKind k) {
     case ChartKind::vertical_bar: return "Vertical bar chart";
     case ChartKind::horizontal_bar: return "Horizontal bar chart";
     case ChartKind::dot: return "Dot chart";
+    case ChartKind::stacked_bar: return "Stacked bar chart";
   }
   return "Chart";
 }

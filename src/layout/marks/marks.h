@@ -4,6 +4,7 @@
 #include <map>
 #include <string>
 
+#include "base/diagnostic.h"
 #include "layout/page_style.h"
 #include "layout/plot_frame.h"
 #include "paint/display_list.h"
@@ -20,6 +21,7 @@ struct MarkContext {
   const PageStyle& style;
   const SeriesColours& colours;
   bool label_series = false;  ///< name series directly (line ends, …)
+  DiagnosticSink* warnings = nullptr;  ///< where marks report what they had to leave out
 };
 
 /// Space a chart kind needs beside the plot for its own labels (line-end
@@ -37,5 +39,6 @@ void draw_line_marks(const MarkContext& ctx, DisplayPage& page);
 void draw_vertical_bar_marks(const MarkContext& ctx, DisplayPage& page);
 void draw_horizontal_bar_marks(const MarkContext& ctx, DisplayPage& page);
 void draw_dot_marks(const MarkContext& ctx, DisplayPage& page);
+void draw_stacked_bar_marks(const MarkContext& ctx, DisplayPage& page);
 
 }  // namespace forme
