@@ -87,13 +87,17 @@ CalloutTarget resolve_callout_target(const CalloutSpec& c, const PanelData& d, c
         throw InputError(c.category.loc, "this panel has no categories to point at",
                          "point at a value with 'x' and 'y', or at a stretch with 'from' and 'to'");
       const double k = category_index(c.category, on_y ? f.y.categories : f.x.categories);
-      // The end of the longest bar (or farthest dot) in that category.
-      double end = 0;
+      // The end of the longest bar (or farthest dot) in that category; for
+      // a stack, the top of its positive part (or the foot of a negative one).
+      double end = 0, up = 0, down = 0;
       for (const auto& s : d.series)
         for (std::size_t i = 0; i < s.x.size(); ++i) {
           const double cat = on_y ? s.y[i] : s.x[i], v = on_y ? s.x[i] : s.y[i];
-          if (cat == k && std::abs(v) > std::abs(end)) end = v;
+          if (cat != k) continue;
+          if (std::abs(v) > std::abs(end)) end = v;
+          (v >= 0 ? up : down) += v;
         }
+      if (d.kind == ChartKind::stacked_bar) end = up > 0 || down == 0 ? up : down;
       t.anchor = on_y ? Point{f.px(end), f.py(k)} : Point{f.px(k), f.py(end)};
       break;
     }
