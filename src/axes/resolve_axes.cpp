@@ -172,7 +172,9 @@ Axis build_axis(const std::vector<const PanelData*>& panels, bool is_x, Diagnost
   for (const PanelData* p : panels) {
     for (const auto& s : p->series)
       for (double v : is_x ? s.x : s.y) e.add(v);
-    if (p->kind == ChartKind::stacked_bar && !is_x) add_stack_ends(*p, e);
+    if ((p->kind == ChartKind::stacked_bar || p->kind == ChartKind::stacked_area) && !is_x) add_stack_ends(*p, e);
+    // A band's depth encodes its value, so stacked areas stand on zero too.
+    if (p->kind == ChartKind::stacked_area && !is_x) from_zero = true;
     // Bar length encodes the value, so the value axis of bars shows zero.
     const bool value_axis = is_x ? p->y_kind == AxisKind::category : p->x_kind == AxisKind::category ||
                                                                         p->x_kind == AxisKind::date;

@@ -44,7 +44,7 @@ struct SheetSpec {
   SourceLoc loc;
 };
 
-enum class ChartKind { line, vertical_bar, horizontal_bar, dot, stacked_bar };
+enum class ChartKind { line, vertical_bar, horizontal_bar, dot, stacked_bar, stacked_area };
 
 /// One axis as the author described it.
 struct AxisSpec {

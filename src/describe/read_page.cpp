@@ -266,6 +266,7 @@ class Builder {
     if (k == "horizontal-bar") return ChartKind::horizontal_bar;
     if (k == "dot") return ChartKind::dot;
     if (k == "stacked-bar") return ChartKind::stacked_bar;
+    if (k == "stacked-area") return ChartKind::stacked_area;
     return ChartKind::line;
   }
 

@@ -103,7 +103,7 @@ struct Schema {
        {"order", &text_list, false, "order of the one-panel-per values"},
        {"gap", &length, false, "space between panels"}});
 
-  NodeSpec kind = choice("a chart kind", {"line", "vertical-bar", "horizontal-bar", "dot", "stacked-bar"});
+  NodeSpec kind = choice("a chart kind", {"line", "vertical-bar", "horizontal-bar", "dot", "stacked-bar", "stacked-area"});
   NodeSpec format_style = choice("a number style", {"plain", "percent", "fraction-percent", "si"});
   NodeSpec format_map = mapping("a number format",
       {{"style", &format_style, false, "plain, percent (values in %), fraction-percent (0.25 = 25%), si (k, M, G)"},
@@ -158,7 +158,7 @@ struct Schema {
        {"offset", &text, false, "pin the note's centre this far from its target: two lengths, right and up, e.g. \"20mm 8mm\""}});
   NodeSpec callouts = list_of("a list of callouts", &callout);
   NodeSpec panel = mapping("a panel",
-      {{"kind", &kind, false, "line, vertical-bar, horizontal-bar, dot, or stacked-bar (one upright bar per category, a segment per series)"},
+      {{"kind", &kind, false, "line, vertical-bar, horizontal-bar, dot, stacked-bar (one upright bar per category, a segment per series) or stacked-area (a band per series laid on the ones before it)"},
        {"table", &text, false, "name of a table under 'tables'"},
        {"x", &text, false, "column for the horizontal position (categories for vertical bars)"},
        {"y", &text, false, "column for the vertical position (categories for horizontal bars and dots)"},

@@ -75,6 +75,24 @@ void rank_priorities(std::vector<PointName>& names) {
   }
 }
 
+// Stacked areas add up from zero: every value must be zero or more, and
+// every series needs a value at every x, or the stack would thin silently.
+void check_stackable(const PanelSpec& p, const PanelData& d, const Table& t) {
+  const Series* first = d.series.empty() ? nullptr : &d.series.front();
+  for (const auto& s : d.series) {
+    for (std::size_t i = 0; i < s.y.size(); ++i)
+      if (s.y[i] < 0)
+        throw InputError(p.y.loc, "stacked areas add up from zero, but '" + (s.name.empty() ? p.y.value : s.name) +
+                                      "' has a negative value (" + format_number(s.y[i], NumberFormat{}) + ")",
+                         "show values that can fall below zero as lines, or as side-by-side bars");
+    if (s.x != first->x)
+      throw InputError(p.series_by.empty() ? p.loc : p.series_by.loc,
+                       "stacked areas need every series at every x, but '" + s.name + "' and '" + first->name +
+                           "' differ in table '" + t.name + "'",
+                       "add the missing rows (a zero where there was nothing), or draw lines instead");
+  }
+}
+
 PanelData build_panel(const PanelSpec& p, const Table& t, const std::vector<std::size_t>& rows,
                       std::string title) {
   if (p.x.empty()) throw InputError(p.loc, "panel has no 'x' column", "name the column for the horizontal position");
@@ -135,7 +153,7 @@ PanelData build_panel(const PanelSpec& p, const Table& t, const std::vector<std:
   }
   // Lines are drawn in x order whatever order the file had (for text
   // categories, their order of first appearance: an ordinal scale).
-  if (p.kind == ChartKind::line)
+  if (p.kind == ChartKind::line || p.kind == ChartKind::stacked_area)
     for (auto& s : d.series) {
       std::vector<std::size_t> idx(s.x.size());
       for (std::size_t i = 0; i < idx.size(); ++i) idx[i] = i;
@@ -148,6 +166,7 @@ PanelData build_panel(const PanelSpec& p, const Table& t, const std::vector<std:
       s = std::move(sorted);
     }
   d.transform = apply_transform(p.transform, d);
+  if (p.kind == ChartKind::stacked_area) check_stackable(p, d, t);
   rank_priorities(d.point_names);
   return d;
 }

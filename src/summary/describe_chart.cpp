@@ -16,6 +16,7 @@ const char* kind_name(ChartKind k) {
     case ChartKind::horizontal_bar: return "Horizontal bar chart";
     case ChartKind::dot: return "Dot chart";
     case ChartKind::stacked_bar: return "Stacked bar chart";
+    case ChartKind::stacked_area: return "Stacked area chart";
   }
   return "Chart";
 }

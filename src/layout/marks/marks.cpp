@@ -8,7 +8,7 @@
 namespace forme {
 
 double marks_right_inset(ChartKind kind, const std::vector<PanelData>& panels, const PageStyle& style) {
-  if (kind != ChartKind::line && kind != ChartKind::stacked_bar) return 0;
+  if (kind != ChartKind::line && kind != ChartKind::stacked_bar && kind != ChartKind::stacked_area) return 0;
   double widest = 0;
   for (const auto& p : panels)
     if (p.series.size() > 1 || (p.series.size() == 1 && !p.series[0].name.empty()))
@@ -43,6 +43,7 @@ void draw_marks(const MarkContext& ctx, DisplayPage& page) {
     case ChartKind::horizontal_bar: return draw_horizontal_bar_marks(ctx, page);
     case ChartKind::dot: return draw_dot_marks(ctx, page);
     case ChartKind::stacked_bar: return draw_stacked_bar_marks(ctx, page);
+    case ChartKind::stacked_area: return draw_stacked_area_marks(ctx, page);
   }
 }
 

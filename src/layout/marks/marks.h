@@ -40,5 +40,6 @@ void draw_vertical_bar_marks(const MarkContext& ctx, DisplayPage& page);
 void draw_horizontal_bar_marks(const MarkContext& ctx, DisplayPage& page);
 void draw_dot_marks(const MarkContext& ctx, DisplayPage& page);
 void draw_stacked_bar_marks(const MarkContext& ctx, DisplayPage& page);
+void draw_stacked_area_marks(const MarkContext& ctx, DisplayPage& page);
 
 }  // namespace forme
