@@ -134,3 +134,34 @@ TEST_CASE("stacked bars: each value is written inside its segment at 4.5:1, or r
   }
   CHECK(found == written);
 }
+
+TEST_CASE("stacked areas: the top edge is the total at every x, on a scale from zero", "[outside][stacked]") {
+  TempDir dir;
+  const std::string page_path = std::string(FORME_TEST_DIR) + "/pages/stacked/area.yaml";
+  forme::DiagnosticSink sink;
+  const forme::DisplayPage page = forme::compose_page(page_path, forme::find_font_dir(FORME_BINARY), sink);
+  // Totals per week, read straight from the CSV.
+  std::map<int, double> total;
+  const std::string csv = read_file(std::string(FORME_TEST_DIR) + "/pages/stacked/data/moorings.csv");
+  std::size_t at = csv.find('\n') + 1;
+  while (at < csv.size()) {
+    const std::size_t end = csv.find('\n', at);
+    const std::string row = csv.substr(at, end - at);
+    total[std::stoi(row)] += std::stod(row.substr(row.rfind(',') + 1));
+    at = end == std::string::npos ? csv.size() : end + 1;
+  }
+  REQUIRE(total.size() == 26);
+  std::vector<const forme::PathItem*> bands;
+  for (const auto& item : page.items)
+    if (const auto* p = std::get_if<forme::PathItem>(&item); p && p->fill && p->closed && p->points.size() == 2 * total.size())
+      bands.push_back(p);
+  REQUIRE(bands.size() == 3);
+  // The first band's lower edge is zero; the last band's upper edge the total.
+  const double zero = bands.front()->points.back().y;
+  for (std::size_t i = 0; i < total.size(); ++i) CHECK(bands.front()->points[2 * total.size() - 1 - i].y == Approx(zero));
+  std::vector<double> per_boat;
+  std::size_t i = 0;
+  for (const auto& [week, boats] : total) per_boat.push_back((zero - bands.back()->points[i++].y) / boats);
+  for (double k : per_boat) CHECK(k == Approx(per_boat.front()).epsilon(1e-9));
+  CHECK(per_boat.front() > 0);
+}
