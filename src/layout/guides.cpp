@@ -73,7 +73,7 @@ std::string trend_equation(double intercept, double slope) {
   return s;
 }
 
-void draw_reference_lines(const MarkContext& ctx, DisplayPage& page) {
+void draw_reference_lines(const MarkContext& ctx, DisplayPage& page, std::vector<SpotChoiceRequest>& labels) {
   const PlotFrame& f = ctx.frame;
   const PageStyle& st = ctx.style;
   const Stroke dashed{st.ink.rule, st.rule_width() * 1.8, {st.base * 0.5, st.base * 0.3}, false};
@@ -86,9 +86,11 @@ void draw_reference_lines(const MarkContext& ctx, DisplayPage& page) {
       page.add(std::move(line));
       if (!r.label.empty()) {
         ShapedText t = shape_text(r.label, st.fonts.regular, st.label_size());
-        const double gap = st.base * 0.25;
-        page.add(text_at(std::move(t), f.plot.right() - gap, y - gap - st.fonts.regular->descent_em() * st.label_size(),
-                         Align::right, st.ink.text, TextRole::value_label));
+        const double gap = st.base * 0.25, w = t.width, h = t.height();
+        const double right = f.plot.right() - gap - w, left = f.plot.left() + gap;
+        labels.push_back({std::move(t),
+                          {{right, y - gap - h, w, h}, {right, y + gap, w, h}, {left, y - gap - h, w, h}, {left, y + gap, w, h}},
+                          st.ink.text, TextRole::value_label, r.loc});
       }
     } else {
       const double x = f.px(reference_x(r, f.x));
@@ -96,8 +98,11 @@ void draw_reference_lines(const MarkContext& ctx, DisplayPage& page) {
       page.add(std::move(line));
       if (!r.label.empty()) {
         ShapedText t = shape_text(r.label, st.fonts.regular, st.label_size());
-        page.add(text_at(std::move(t), x + st.base * 0.3, f.plot.top() + st.fonts.regular->ascent_em() * st.label_size(),
-                         Align::left, st.ink.text, TextRole::value_label));
+        const double gap = st.base * 0.3, w = t.width, h = t.height();
+        const double top = f.plot.top(), bottom = f.plot.bottom() - h;
+        labels.push_back({std::move(t),
+                          {{x + gap, top, w, h}, {x - gap - w, top, w, h}, {x + gap, bottom, w, h}, {x - gap - w, bottom, w, h}},
+                          st.ink.text, TextRole::value_label, r.loc});
       }
     }
   }

@@ -49,6 +49,31 @@ Rect pinned_box(const CalloutSpec& c, Point target, const Rect& plot, double w, 
   return {r, b, w, h};
 }
 
+void place_choices(const PanelMovables& p, const PageStyle& st, DisplayPage& page, DiagnosticSink& warnings) {
+  const double gap = st.base * 0.15;
+  for (const SpotChoiceRequest& c : p.choices) {
+    if (c.spots.empty()) continue;
+    const std::vector<Rect> obstacles = text_boxes(page, gap);
+    int best = -1, best_marks = 0;
+    for (std::size_t i = 0; i < c.spots.size(); ++i) {
+      const Rect& box = c.spots[i];
+      if (std::any_of(obstacles.begin(), obstacles.end(), [&](const Rect& o) { return o.overlaps(box); })) continue;
+      const int marks = static_cast<int>(std::count_if(page.data_marks.begin(), page.data_marks.end(),
+                                                       [&](const Rect& m) { return m.overlaps(box); }));
+      if (best < 0 || marks < best_marks) best = static_cast<int>(i), best_marks = marks;
+      if (marks == 0) break;
+    }
+    if (best < 0) {
+      warnings.warn(c.loc, "the label '" + c.text.utf8 + "' covers other text wherever it goes",
+                    "shorten it, or give the panel more room");
+      best = 0;
+    }
+    const Rect& box = c.spots[static_cast<std::size_t>(best)];
+    const double asc = c.text.ascent;
+    page.add(TextItem{c.text, {box.x, box.y + asc}, c.ink, c.role});
+  }
+}
+
 void place_callouts(const PanelMovables& p, const PageStyle& st, DisplayPage& page, std::vector<Leader>& leaders,
                     DiagnosticSink& warnings) {
   const double pad = st.base * 0.3, gap = st.base * 0.15;
@@ -154,6 +179,7 @@ void place_point_names(const PanelMovables& p, std::size_t panel, const PageStyl
 void place_movable_text(const std::vector<PanelMovables>& panels, const PageStyle& st, DisplayPage& page,
                         DiagnosticSink& warnings) {
   std::vector<Leader> leaders;
+  for (const auto& p : panels) place_choices(p, st, page, warnings);
   for (const auto& p : panels) place_callouts(p, st, page, leaders, warnings);
   for (std::size_t i = 0; i < panels.size(); ++i) place_point_names(panels[i], i, st, page, warnings);
 }

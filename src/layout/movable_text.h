@@ -6,8 +6,10 @@
 /// page coordinates against all of it and against what was placed before:
 /// nothing collides across panels or with the furniture.
 ///
-/// Order: callouts first (the author wrote them, so they matter most), then
-/// point names, panel by panel, each seeing everything placed before it.
+/// Order: labels with a few fixed spots first (reference-line labels, whose
+/// place is nearly given), then callouts (the author wrote them, so they
+/// matter most), then point names, panel by panel, each seeing everything
+/// placed before it.
 /// A point name that finds no room is joined to its point by a leader line
 /// or, failing that, left out and reported as a warning at its table row.
 #include <string>
@@ -15,6 +17,7 @@
 
 #include "base/diagnostic.h"
 #include "describe/page_spec.h"
+#include "text/shaped_text.h"
 #include "layout/page_style.h"
 #include "paint/display_list.h"
 
@@ -33,9 +36,21 @@ struct CalloutRequest {
   Point target;                       ///< where the leader starts
 };
 
+/// A label with a few possible spots, best first (a reference line's
+/// label: above or below the line, at its right or left end). The page
+/// pass takes the first spot clear of all text, covering the fewest marks.
+struct SpotChoiceRequest {
+  ShapedText text;
+  std::vector<Rect> spots;  ///< boxes of text.width × text.height(), best first
+  Rgb ink;
+  TextRole role = TextRole::value_label;
+  SourceLoc loc;  ///< for the warning when every spot covers text
+};
+
 /// Everything movable in one panel.
 struct PanelMovables {
   Rect plot;
+  std::vector<SpotChoiceRequest> choices;
   std::vector<CalloutRequest> callouts;
   std::vector<PointNameRequest> names;
 };
