@@ -116,3 +116,31 @@ TEST_CASE("callouts: a stretch of x is drawn as a band the height of the plot", 
     }
   CHECK(bands == 1);
 }
+
+TEST_CASE("reference labels: the label moves below its line when the data run through the spot above", "[outside][callout]") {
+  TempDir dir;
+  // The data run flat at 5.1 over the last days, just above a reference at 5,
+  // so the first spot (above the line at its right end) covers the line.
+  write_file(dir.file("t.csv"), "day,value\n1,1\n2,1\n3,1\n4,1\n5,5.1\n6,5.1\n");
+  write_file(dir.file("page.yaml"),
+             "sheet: {size: A5, orientation: landscape, margins: 12mm}\n"
+             "heading: {title: A reference label test page}\n"
+             "tables: {t: t.csv}\n"
+             "panel: {kind: line, table: t, x: day, y: value, x-unit: days, y-unit: litres, y-max: 6,\n"
+             "        references: [{y: 5, label: Limit}]}\n"
+             "source: \"Source: invented for this test\"\n");
+  forme::DiagnosticSink sink;
+  const auto page = forme::compose_page(dir.file("page.yaml"), forme::find_font_dir(FORME_BINARY), sink);
+  double line_y = -1;
+  for (const auto& item : page.items)
+    if (const auto* p = std::get_if<forme::PathItem>(&item); p && p->stroke && !p->stroke->dash.empty()) line_y = p->points[0].y;
+  REQUIRE(line_y > 0);
+  int found = 0;
+  for (const auto& item : page.items)
+    if (const auto* t = std::get_if<forme::TextItem>(&item); t && t->text.utf8 == "Limit") {
+      ++found;
+      CHECK(t->box().top() > line_y);  // below the line (y grows down the page)
+      CHECK(t->box().right() > page.plot_areas.front().cx());  // still at the right end
+    }
+  CHECK(found == 1);
+}
