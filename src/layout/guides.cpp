@@ -40,26 +40,16 @@ double reference_x(const ReferenceLine& r, const Axis& x) {
   throw InputError(r.x.loc, "'" + r.x.value + "' is not a number");
 }
 
-// The equation goes in a corner of the plot that no dot and no trend line
-// crosses: the corners off the line's diagonal first.
-Rect equation_box(const MarkContext& ctx, const ShapedText& t, const LinearFit& fit, const std::vector<Point>& line) {
-  const PlotFrame& f = ctx.frame;
-  const double pad = ctx.style.base * 0.4;
+// The equation's spots: the corners of the plot, those off the line's
+// diagonal first. The page pass takes the first clear of dots, lines and text.
+std::vector<Rect> equation_spots(const PlotFrame& f, const PageStyle& st, const ShapedText& t, const LinearFit& fit) {
+  const double pad = st.base * 0.4;
   const double w = t.width, h = t.height();
   const Rect tl{f.plot.left() + pad, f.plot.top() + pad, w, h};
   const Rect tr{f.plot.right() - pad - w, f.plot.top() + pad, w, h};
   const Rect bl{f.plot.left() + pad, f.plot.bottom() - pad - h, w, h};
   const Rect br{f.plot.right() - pad - w, f.plot.bottom() - pad - h, w, h};
-  const std::vector<Rect> order = fit.slope >= 0 ? std::vector<Rect>{tl, br, tr, bl} : std::vector<Rect>{tr, bl, tl, br};
-  const double r = ctx.style.dot_radius() * 1.2;
-  for (const Rect& c : order) {
-    bool clear = !segment_meets_rect(line[0], line[1], c.inflate(pad / 2));
-    for (const auto& s : ctx.data.series)
-      for (std::size_t i = 0; i < s.x.size() && clear; ++i)
-        clear = !Rect{f.px(s.x[i]) - r, f.py(s.y[i]) - r, 2 * r, 2 * r}.overlaps(c.inflate(pad / 2));
-    if (clear) return c;
-  }
-  return order.front();
+  return fit.slope >= 0 ? std::vector<Rect>{tl, br, tr, bl} : std::vector<Rect>{tr, bl, tl, br};
 }
 
 }  // namespace
@@ -108,7 +98,7 @@ void draw_reference_lines(const MarkContext& ctx, DisplayPage& page, std::vector
   }
 }
 
-void draw_trend_lines(const MarkContext& ctx, DisplayPage& page) {
+void draw_trend_lines(const MarkContext& ctx, DisplayPage& page, std::vector<SpotChoiceRequest>& labels) {
   const PanelSpec& spec = *ctx.data.spec;
   if (spec.trend == Trend::none || ctx.data.kind != ChartKind::dot) return;
   if (ctx.data.x_kind != AxisKind::number || ctx.data.y_kind != AxisKind::number)
@@ -124,13 +114,12 @@ void draw_trend_lines(const MarkContext& ctx, DisplayPage& page) {
     PathItem line;
     line.points = {{f.px(x0), f.py(fit->intercept + fit->slope * x0)}, {f.px(x1), f.py(fit->intercept + fit->slope * x1)}};
     line.stroke = Stroke{text_ink(colour, st.ink.paper, 3.0), st.line_width() * 0.8, {}, true};
-    const std::vector<Point> ends = line.points;
+    note_line_marks(line.points, page);  // text placed later keeps off the trend line too
     page.add(std::move(line));
     if (spec.trend == Trend::line_with_equation) {
       ShapedText t = shape_text(trend_equation(fit->intercept, fit->slope), st.fonts.regular, st.label_size());
-      const Rect where = equation_box(ctx, t, *fit, ends);
-      page.add(text_at(std::move(t), where.x, where.y + st.fonts.regular->ascent_em() * st.label_size(), Align::left,
-                       text_ink(colour, st.ink.paper), TextRole::value_label));
+      std::vector<Rect> spots = equation_spots(f, st, t, *fit);
+      labels.push_back({std::move(t), std::move(spots), text_ink(colour, st.ink.paper), TextRole::value_label, spec.loc});
     }
   }
 }

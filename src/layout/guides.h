@@ -14,7 +14,8 @@ void draw_reference_lines(const MarkContext& ctx, DisplayPage& page, std::vector
 
 /// One ordinary least-squares line per series of a numeric dot panel, across
 /// the series' own x range, optionally labelled with its equation.
-void draw_trend_lines(const MarkContext& ctx, DisplayPage& page);
+/// The equation goes to the page pass with the plot's corners as its spots.
+void draw_trend_lines(const MarkContext& ctx, DisplayPage& page, std::vector<SpotChoiceRequest>& labels);
 
 /// "y = 3.00 + 0.500x": the intercept to 3 significant figures, the slope
 /// to 3 significant figures, Unicode minus for negatives.

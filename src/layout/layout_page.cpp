@@ -219,7 +219,7 @@ DisplayPage layout_page(const PageSpec& spec, const std::vector<PanelData>& pane
     draw_axis_backdrop(f, st, page);
     const MarkContext ctx{panels[i], f, st, colours, name_series, &warnings};
     draw_marks(ctx, page);
-    draw_trend_lines(ctx, page);
+    draw_trend_lines(ctx, page, moving.choices);
     draw_reference_lines(ctx, page, moving.choices);
     draw_axis_labels(f, st, AxisLabelling{shows_x(static_cast<int>(i)), shows_y(c)}, page);
     if (!f.x.title.empty() && shows_x(static_cast<int>(i))) {

@@ -58,8 +58,10 @@ void place_choices(const PanelMovables& p, const PageStyle& st, DisplayPage& pag
     for (std::size_t i = 0; i < c.spots.size(); ++i) {
       const Rect& box = c.spots[i];
       if (std::any_of(obstacles.begin(), obstacles.end(), [&](const Rect& o) { return o.overlaps(box); })) continue;
+      // Marks are counted with a little air around the box, so the label does not touch them.
+      const Rect near = box.inflate(gap);
       const int marks = static_cast<int>(std::count_if(page.data_marks.begin(), page.data_marks.end(),
-                                                       [&](const Rect& m) { return m.overlaps(box); }));
+                                                       [&](const Rect& m) { return m.overlaps(near); }));
       if (best < 0 || marks < best_marks) best = static_cast<int>(i), best_marks = marks;
       if (marks == 0) break;
     }
