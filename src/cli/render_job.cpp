@@ -16,6 +16,7 @@
 #include "colour/palette.h"
 #include "data/csv_reader.h"
 #include "describe/read_page.h"
+#include "layout/content_height.h"
 #include "layout/layout_page.h"
 #include "layout/page_style.h"
 #include "layout/press_sheet.h"
@@ -107,6 +108,7 @@ ComposedDocument compose_document(const std::string& page_path, const std::strin
   std::vector<PanelAxes> axes = resolve_axes(panels, spec->grid, sink); // 3. resolve scales
   audit_page(*spec, panels, axes, sink);
   PageStyle style = style_for(*spec, font_dir);                     // 4. measure text (fonts)
+  if (spec->sheet.height_from_content) spec->sheet.height = content_height(*spec, panels, axes, style);
   ComposedDocument doc;
   doc.pages.push_back(layout_page(*spec, panels, axes, style, sink)); // 5-6. lay out, place labels
   audit_layout(*spec, doc.pages.front(), sink);

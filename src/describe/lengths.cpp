@@ -58,6 +58,12 @@ std::optional<SheetSize> find_sheet_size(std::string_view name) {
   return std::nullopt;
 }
 
+std::optional<double> column_width_mm(std::string_view name) {
+  if (name == "single-column") return 89.0;
+  if (name == "double-column") return 178.0;
+  return std::nullopt;
+}
+
 std::optional<std::pair<double, double>> parse_custom_size(std::string_view text) {
   auto x = text.find_first_of("x×");
   if (x == std::string_view::npos) return std::nullopt;

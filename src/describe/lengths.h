@@ -23,6 +23,11 @@ const std::vector<SheetSize>& sheet_sizes();
 /// Looks a size up by name, case-insensitively ("a4", "Letter").
 std::optional<SheetSize> find_sheet_size(std::string_view name);
 
+/// Width of a journal figure size, in millimetres: "single-column" 89,
+/// "double-column" 178 (common practice; journals' instructions differ,
+/// mostly 85-90 mm and 170-180 mm). nullopt for other names.
+std::optional<double> column_width_mm(std::string_view name);
+
 /// Parses a custom size "WIDTH x HEIGHT" with units ("120mm x 80mm").
 std::optional<std::pair<double, double>> parse_custom_size(std::string_view text);
 

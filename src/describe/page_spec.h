@@ -40,6 +40,9 @@ struct SheetSpec {
   std::string size_name;     ///< "A4", "letter", or "custom"
   double width = 0, height = 0;  ///< points, after orientation: the trimmed page
   Margins margins;
+  /// Column figures without a stated height: `height` is provisional and
+  /// the driver sets it from the laid-out content.
+  bool height_from_content = false;
   PressSpec press;
   SourceLoc loc;
 };

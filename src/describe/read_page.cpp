@@ -118,7 +118,11 @@ class Builder {
     double w = mm_to_pt(210), h = mm_to_pt(297);
     if (n && n["size"]) {
       const std::string& name = n["size"].Scalar();
-      if (auto known = find_sheet_size(name)) {
+      if (auto column = column_width_mm(name)) {
+        s.size_name = name;
+        w = mm_to_pt(*column);
+        h = column_height(n, w, s);
+      } else if (auto known = find_sheet_size(name)) {
         s.size_name = known->name;
         w = mm_to_pt(known->width_mm);
         h = mm_to_pt(known->height_mm);
@@ -142,9 +146,15 @@ class Builder {
     } else if (n && n["orientation"] && n["orientation"].Scalar() == "portrait") {
       if (w > h) std::swap(w, h);
     }
+    if (!column_width_mm(s.size_name))
+      for (const char* key : {"height", "height-ratio"})
+        if (n && n[key])
+          throw InputError(doc_.loc(n[key]), std::string("'") + key + "' applies to single-column and double-column figures",
+                           "give other sheets their height in the size, such as \"120mm x 80mm\"");
     s.width = w;
     s.height = h;
-    double d = mm_to_pt(15);
+    // A figure's frame is the journal's business: small default margins.
+    double d = column_width_mm(s.size_name) ? mm_to_pt(1.5) : mm_to_pt(15);
     s.margins = {d, d, d, d};
     if (n && n["margins"]) s.margins = margins(n["margins"]);
     const Margins& m = s.margins;
@@ -159,6 +169,27 @@ class Builder {
     }
     if (n) s.press = press(n);
     return s;
+  }
+
+  // A column figure's height: stated, as a multiple of the width, or
+  // (provisionally, twice the width) left to the content.
+  double column_height(const YAML::Node& n, double w, SheetSpec& s) {
+    if (n["height"] && n["height-ratio"])
+      throw InputError(doc_.loc(n["height-ratio"]), "give 'height' or 'height-ratio', not both");
+    if (n["height"]) {
+      const double h = *parse_length(n["height"].Scalar());
+      if (h <= 0) throw InputError(doc_.loc(n["height"]), "sheet height must be positive");
+      return h;
+    }
+    if (n["height-ratio"]) {
+      const double r = std::stod(n["height-ratio"].Scalar());
+      if (!(r >= 0.1 && r <= 10))
+        throw InputError(doc_.loc(n["height-ratio"]), "height-ratio must lie between 0.1 and 10",
+                         "0.75 makes a figure three quarters as tall as it is wide");
+      return w * r;
+    }
+    s.height_from_content = true;
+    return w * 2;
   }
 
   PressSpec press(const YAML::Node& n) {

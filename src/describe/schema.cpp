@@ -42,6 +42,7 @@ struct Schema {
   NodeSpec integer = scalar("a whole number", ScalarType::integer);
   NodeSpec length = scalar("a length with its unit, such as 18mm, 1.5cm, 0.5in or 9pt", ScalarType::length);
   NodeSpec boolean = scalar("true or false", ScalarType::boolean);
+  NodeSpec number = scalar("a number", ScalarType::number);
   NodeSpec text_list = list_of("a list of strings", &text);
 
   NodeSpec margins_map = mapping("margins for each side",
@@ -58,7 +59,9 @@ struct Schema {
   }();
   NodeSpec orientation = choice("portrait or landscape", {"portrait", "landscape"});
   NodeSpec sheet = mapping("the sheet",
-      {{"size", &text, false, "A0-A6, B0-B6, letter, legal, tabloid, or \"WIDTH x HEIGHT\" with units"},
+      {{"size", &text, false, "A0-A6, B0-B6, letter, legal, tabloid, single-column (89 mm wide), double-column (178 mm wide), or \"WIDTH x HEIGHT\" with units"},
+       {"height", &length, false, "single-column and double-column figures: the height (default: as tall as the chart needs)"},
+       {"height-ratio", &number, false, "single-column and double-column figures: height as a multiple of the width, e.g. 0.75"},
        {"orientation", &orientation, false, "portrait (default) or landscape"},
        {"margins", &margins, false, "space between the sheet edge and the content"},
        {"bleed", &length, false, "print shops: how far the background runs past the trimmed edge, e.g. 3mm (the PDF gets a BleedBox)"},
@@ -124,7 +127,6 @@ struct Schema {
     n.any_key = &text;
     return n;
   }();
-  NodeSpec number = scalar("a number", ScalarType::number);
   NodeSpec axis_scale = choice("linear or log", {"linear", "log"});
   NodeSpec transform_kind = choice("a transform", {"index", "percent-change", "difference", "share"});
   NodeSpec transform = mapping("a transform of the values",
