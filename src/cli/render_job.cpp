@@ -34,7 +34,13 @@ namespace {
 PageStyle style_for(const PageSpec& spec, const std::string& font_dir) {
   PageStyle st;
   st.fonts = open_bundled_fonts(font_dir);
-  st.base = spec.type_size > 0 ? spec.type_size : base_size_for_sheet(spec.sheet.width, spec.sheet.height);
+  const TypeSpec& t = spec.type;
+  if (spec.type_size > 0) st.base = spec.type_size;
+  else if (t.reading_distance_cm > 0) st.base = base_size_for_distance(t.reading_distance_cm);
+  else if (t.job != Job::none) st.base = base_size_for_distance(reading_distance_cm(t.job));
+  else st.base = base_size_for_sheet(spec.sheet.width, spec.sheet.height);
+  st.steps = type_steps(t.job);
+  st.stated = t;
   st.ink = Inks{ink::text, ink::muted, ink::rule, ink::grid, spec.sheet.press.background.value_or(Rgb{1, 1, 1})};
   st.series = default_categorical().colours;
   return st;
@@ -108,6 +114,13 @@ ComposedDocument compose_document(const std::string& page_path, const std::strin
   std::vector<PanelAxes> axes = resolve_axes(panels, spec->grid, sink); // 3. resolve scales
   audit_page(*spec, panels, axes, sink);
   PageStyle style = style_for(*spec, font_dir);                     // 4. measure text (fonts)
+  // Default margins grow with type set larger than 8 pt (posters), so the
+  // page keeps its proportions; margins the page states stay as stated.
+  if (!spec->sheet.margins_stated && style.base > 8) {
+    Margins& m = spec->sheet.margins;
+    const double k = style.base / 8;
+    m = {m.top * k, m.right * k, m.bottom * k, m.left * k};
+  }
   if (spec->sheet.height_from_content) spec->sheet.height = content_height(*spec, panels, axes, style);
   ComposedDocument doc;
   doc.pages.push_back(layout_page(*spec, panels, axes, style, sink)); // 5-6. lay out, place labels

@@ -40,6 +40,7 @@ struct SheetSpec {
   std::string size_name;     ///< "A4", "letter", or "custom"
   double width = 0, height = 0;  ///< points, after orientation: the trimmed page
   Margins margins;
+  bool margins_stated = false;  ///< false: the defaults, which grow with poster type
   /// Column figures without a stated height: `height` is provisional and
   /// the driver sets it from the laid-out content.
   bool height_from_content = false;
@@ -146,6 +147,17 @@ struct DataSpec {
   bool table_page = false;  ///< set the plotted rows as a table after the chart
 };
 
+/// What a page is for: it sets the reading distance and the type steps.
+enum class Job { none, figure, briefing, report, poster };
+
+/// Type and stroke sizes the page states; 0 = from the job and sheet.
+struct TypeSpec {
+  Job job = Job::none;
+  double reading_distance_cm = 0;
+  double title = 0, standfirst = 0, panel_title = 0, note = 0;  ///< points
+  double line_width = 0, rule_width = 0, tick_length = 0, dot_radius = 0;  ///< points
+};
+
 struct PageSpec {
   std::string file;      ///< the description's path, for messages
   std::string base_dir;  ///< folder that relative paths start from
@@ -161,7 +173,8 @@ struct PageSpec {
   std::string limitations;            ///< what the data cannot show
   DocumentSpec document;
   DataSpec data;
-  double type_size = 0;  ///< base text size in points; 0 = from the sheet
+  double type_size = 0;  ///< base text size in points; 0 = from the job, else the sheet
+  TypeSpec type;
   SourceLoc loc;
 };
 

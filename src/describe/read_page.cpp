@@ -67,6 +67,16 @@ class Builder {
       if (d["attach"]) p.data.attach = d["attach"].Scalar() == "true";
       if (d["table-page"]) p.data.table_page = d["table-page"].Scalar() == "true";
     }
+    if (auto t = r["type"]) p.type = type(t);
+    if (auto m = r["marks"]) {
+      auto get = [&](const char* key, double& into) {
+        if (m[key]) into = positive(m[key], key);
+      };
+      get("line-width", p.type.line_width);
+      get("rule-width", p.type.rule_width);
+      get("tick-length", p.type.tick_length);
+      get("dot-radius", p.type.dot_radius);
+    }
     if (auto t = r["type"]; t && t["size"]) {
       p.type_size = *parse_length(t["size"].Scalar());
       if (p.type_size < 6)
@@ -157,6 +167,7 @@ class Builder {
     double d = column_width_mm(s.size_name) ? mm_to_pt(1.5) : mm_to_pt(15);
     s.margins = {d, d, d, d};
     if (n && n["margins"]) s.margins = margins(n["margins"]);
+    s.margins_stated = n && n["margins"];
     const Margins& m = s.margins;
     if (m.left + m.right >= w * 0.8 || m.top + m.bottom >= h * 0.8) {
       if (n && n["margins"])
@@ -190,6 +201,40 @@ class Builder {
     }
     s.height_from_content = true;
     return w * 2;
+  }
+
+  double positive(const YAML::Node& n, const std::string& what) {
+    const double v = *parse_length(n.Scalar());
+    if (v <= 0) throw InputError(doc_.loc(n), what + " must be more than 0");
+    return v;
+  }
+
+  // Stated sizes below 6 pt cannot be read in print (common practice).
+  double type_size(const YAML::Node& n) {
+    const double v = *parse_length(n.Scalar());
+    if (v < 6)
+      throw InputError(doc_.loc(n), "type size below 6pt cannot be read in print",
+                       "use 6pt or more (common practice for printed figures)");
+    return v;
+  }
+
+  TypeSpec type(const YAML::Node& n) {
+    TypeSpec t;
+    if (n["job"]) {
+      const std::string& j = n["job"].Scalar();
+      t.job = j == "figure" ? Job::figure : j == "briefing" ? Job::briefing : j == "report" ? Job::report : Job::poster;
+    }
+    if (n["reading-distance"]) {
+      const double cm = *parse_length(n["reading-distance"].Scalar()) * 2.54 / 72;
+      if (cm < 15 || cm > 2000)
+        throw InputError(doc_.loc(n["reading-distance"]), "reading distance must lie between 15cm and 20m");
+      t.reading_distance_cm = cm;
+    }
+    if (n["title-size"]) t.title = type_size(n["title-size"]);
+    if (n["standfirst-size"]) t.standfirst = type_size(n["standfirst-size"]);
+    if (n["panel-title-size"]) t.panel_title = type_size(n["panel-title-size"]);
+    if (n["note-size"]) t.note = type_size(n["note-size"]);
+    return t;
   }
 
   PressSpec press(const YAML::Node& n) {

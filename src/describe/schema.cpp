@@ -204,7 +204,20 @@ struct Schema {
       {{"attach", &boolean, false, "PDF: embed the rows each panel plots as CSV files (default true)"},
        {"table-page", &boolean, false, "PDF: set the plotted rows as a table on pages after the chart (default false)"}});
 
-  NodeSpec type = mapping("type settings", {{"size", &length, false, "base text size (tick labels, notes)"}});
+  NodeSpec job = choice("figure, briefing, report or poster", {"figure", "briefing", "report", "poster"});
+  NodeSpec type = mapping("type settings",
+      {{"size", &length, false, "base text size (tick labels, axis titles); overrides the job's"},
+       {"job", &job, false, "figure (7-9 pt), briefing (8-11 pt), report, or poster (read from 1 m): sets the reading distance and the type steps"},
+       {"reading-distance", &length, false, "how far away the page is read, e.g. 150cm: the base size is 8 pt at 40 cm, in proportion"},
+       {"title-size", &length, false, "the heading's title"},
+       {"standfirst-size", &length, false, "the standfirst"},
+       {"panel-title-size", &length, false, "panel titles"},
+       {"note-size", &length, false, "notes and the source line"}});
+  NodeSpec marks = mapping("mark sizes",
+      {{"line-width", &length, false, "data lines"},
+       {"rule-width", &length, false, "gridlines, ticks and axis lines"},
+       {"tick-length", &length, false, "tick marks"},
+       {"dot-radius", &length, false, "dots"}});
 
   NodeSpec page = mapping("a page description",
       {{"sheet", &sheet, false, "paper size, orientation and margins"},
@@ -219,7 +232,8 @@ struct Schema {
        {"limitations", &text, false, "what the data cannot show, printed at the foot of the page"},
        {"document", &document, false, "author, subject and keywords for the PDF's document information"},
        {"data", &data, false, "whether the PDF carries the plotted rows: attached CSV files, a table page"},
-       {"type", &type, false, "type sizes"}});
+       {"type", &type, false, "type sizes: by job, by reading distance, or each stated"},
+       {"marks", &marks, false, "line widths, tick length and dot size (default: in proportion to the type)"}});
 };
 
 }  // namespace

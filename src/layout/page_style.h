@@ -4,6 +4,7 @@
 #include <vector>
 
 #include "colour/rgb.h"
+#include "layout/type_scale.h"
 #include "text/font.h"
 
 namespace forme {
@@ -22,15 +23,18 @@ struct PageStyle {
   Inks ink;
   std::vector<Rgb> series;  ///< colours for series, in order of first appearance
 
-  double title_size() const { return base * 2.0; }
-  double standfirst_size() const { return base * 1.25; }
-  double panel_title_size() const { return base * 1.1; }
+  TypeSteps steps;  ///< other sizes as multiples of `base`
+  TypeSpec stated;  ///< sizes the page states, which win (0 = not stated)
+
+  double title_size() const { return or_else(stated.title, base * steps.title); }
+  double standfirst_size() const { return or_else(stated.standfirst, base * steps.standfirst); }
+  double panel_title_size() const { return or_else(stated.panel_title, base * steps.panel_title); }
   double label_size() const { return base; }
-  double note_size() const { return base * 0.9 < 6 ? 6 : base * 0.9; }
-  double line_width() const { return base * 0.19; }   ///< data lines
-  double rule_width() const { return base * 0.07; }   ///< gridlines and ticks
-  double tick_length() const { return base * 0.35; }
-  double dot_radius() const { return base * 0.3; }
+  double note_size() const { return or_else(stated.note, base * steps.note < 6 ? 6 : base * steps.note); }
+  double line_width() const { return or_else(stated.line_width, base * 0.19); }   ///< data lines
+  double rule_width() const { return or_else(stated.rule_width, base * 0.07); }   ///< gridlines and ticks
+  double tick_length() const { return or_else(stated.tick_length, base * 0.35); }
+  double dot_radius() const { return or_else(stated.dot_radius, base * 0.3); }
 
   /// Height of a line of text as PDF readers measure it: the font's
   /// ascender plus descender. Lines are stacked at least this far apart so
@@ -38,6 +42,9 @@ struct PageStyle {
   static double line_height(const FontRef& font, double size) {
     return (font->ascent_em() + font->descent_em()) * size;
   }
+
+ private:
+  static double or_else(double stated_size, double derived) { return stated_size > 0 ? stated_size : derived; }
 };
 
 /// Base type size for a sheet: 8 pt on A4/Letter, growing with the square
