@@ -70,7 +70,7 @@ class Builder {
     if (auto t = r["type"]) p.type = type(t);
     if (auto m = r["marks"]) {
       auto get = [&](const char* key, double& into) {
-        if (m[key]) into = positive(m[key], key);
+        if (m[key]) into = positive_length(m[key], key);
       };
       get("line-width", p.type.line_width);
       get("rule-width", p.type.rule_width);
@@ -203,7 +203,7 @@ class Builder {
     return w * 2;
   }
 
-  double positive(const YAML::Node& n, const std::string& what) {
+  double positive_length(const YAML::Node& n, const std::string& what) {
     const double v = *parse_length(n.Scalar());
     if (v <= 0) throw InputError(doc_.loc(n), what + " must be more than 0");
     return v;
