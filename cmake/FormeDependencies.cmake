@@ -9,11 +9,16 @@ pkg_check_modules(FREETYPE REQUIRED IMPORTED_TARGET freetype2)
 pkg_check_modules(UNIBREAK REQUIRED IMPORTED_TARGET libunibreak)
 # libqpdf: embeds the plotted rows and adds link annotations to finished PDFs.
 pkg_check_modules(QPDF REQUIRED IMPORTED_TARGET libqpdf)
+# fontconfig: finds installed fonts for characters the bundled Noto Sans lacks.
+pkg_check_modules(FONTCONFIG REQUIRED IMPORTED_TARGET fontconfig)
+# FriBidi: the Unicode Bidirectional Algorithm (UAX #9) for right-to-left text.
+pkg_check_modules(FRIBIDI REQUIRED IMPORTED_TARGET fribidi)
 find_package(yaml-cpp REQUIRED)
 find_package(CLI11 REQUIRED)
 
 add_library(forme_deps INTERFACE)
 target_link_libraries(forme_deps INTERFACE
   PkgConfig::CAIRO PkgConfig::HARFBUZZ PkgConfig::FREETYPE PkgConfig::UNIBREAK PkgConfig::QPDF
+  PkgConfig::FONTCONFIG PkgConfig::FRIBIDI
   yaml-cpp CLI11::CLI11)
 add_library(forme::deps ALIAS forme_deps)

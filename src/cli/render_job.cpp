@@ -10,6 +10,7 @@
 #include <optional>
 #include <sstream>
 
+#include "audit/missing_glyphs.h"
 #include "audit/page_audit.h"
 #include "axes/axis.h"
 #include "cli/signal_cleanup.h"
@@ -125,6 +126,7 @@ ComposedDocument compose_document(const std::string& page_path, const std::strin
   ComposedDocument doc;
   doc.pages.push_back(layout_page(*spec, panels, axes, style, sink)); // 5-6. lay out, place labels
   audit_layout(*spec, doc.pages.front(), sink);
+  audit_missing_glyphs(*spec, doc.pages.front(), sink);
   for (const auto& d : sink.items())
     if (d.severity == Severity::error) throw InputError(d);  // reported already; stops the write
   // What travels with the chart: the rows plotted, the page in words.

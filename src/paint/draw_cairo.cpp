@@ -2,6 +2,7 @@
 
 #include <cairo.h>
 
+#include <algorithm>
 #include <vector>
 
 namespace forme {
@@ -49,46 +50,48 @@ void draw(cairo_t* cr, const CircleItem& c) {
 // Glyphs go out with their clusters (cairo_show_text_glyphs) so the PDF
 // maps every glyph back to the characters it came from: text stays
 // searchable even where the font substitutes ligatures or contextual forms.
-void draw(cairo_t* cr, const TextItem& t) {
+// Each run is one font and one direction, drawn with its own bytes.
+void draw_run(cairo_t* cr, const TextItem& t, const GlyphRun& run) {
   const ShapedText& s = t.text;
-  if (s.glyphs.empty()) return;
-  cairo_set_font_face(cr, s.font->cairo_face());
+  cairo_set_font_face(cr, run.font->cairo_face());
   cairo_set_font_size(cr, s.size);
-  set_colour(cr, t.colour);
 
-  std::vector<cairo_glyph_t> glyphs(s.glyphs.size());
-  for (std::size_t i = 0; i < s.glyphs.size(); ++i)
-    glyphs[i] = {s.glyphs[i].index, t.origin.x + s.glyphs[i].x, t.origin.y + s.glyphs[i].y};
+  std::vector<cairo_glyph_t> glyphs;
+  for (std::size_t i = run.glyph_begin; i < run.glyph_end; ++i)
+    glyphs.push_back({s.glyphs[i].index, t.origin.x + s.glyphs[i].x, t.origin.y + s.glyphs[i].y});
 
   // HarfBuzz clusters are byte offsets, one per glyph, monotone in visual
-  // order. Cairo wants runs of (bytes, glyphs).
+  // order (rising left to right, falling in a right-to-left run). Cairo
+  // wants (bytes, glyphs) pairs in the order the glyphs are drawn.
   std::vector<cairo_text_cluster_t> clusters;
-  const int total = static_cast<int>(s.utf8.size());
-  std::size_t i = 0;
-  while (i < s.glyphs.size()) {
-    unsigned c = s.glyphs[i].cluster;
+  std::vector<unsigned> starts;
+  std::size_t i = run.glyph_begin;
+  while (i < run.glyph_end) {
+    const unsigned c = s.glyphs[i].cluster;
     std::size_t j = i;
-    while (j < s.glyphs.size() && s.glyphs[j].cluster == c) ++j;
-    unsigned next_cluster = j < s.glyphs.size() ? s.glyphs[j].cluster : static_cast<unsigned>(total);
-    int bytes = s.rtl ? 0 : static_cast<int>(next_cluster) - static_cast<int>(c);
-    clusters.push_back({bytes, static_cast<int>(j - i)});
+    while (j < run.glyph_end && s.glyphs[j].cluster == c) ++j;
+    clusters.push_back({0, static_cast<int>(j - i)});
+    starts.push_back(c);
     i = j;
   }
-  cairo_text_cluster_flags_t flags = static_cast<cairo_text_cluster_flags_t>(0);
-  if (s.rtl) {
-    // Visual order runs backwards through the string: recompute byte counts.
-    flags = CAIRO_TEXT_CLUSTER_FLAG_BACKWARD;
-    std::size_t g = 0;
-    unsigned prev_end = static_cast<unsigned>(total);
-    for (auto& cl : clusters) {
-      unsigned start = s.glyphs[g].cluster;
-      cl.num_bytes = static_cast<int>(prev_end - start);
-      prev_end = start;
-      g += static_cast<std::size_t>(cl.num_glyphs);
-    }
+  // A cluster runs from its start to the next larger start (or the run's end).
+  for (std::size_t k = 0; k < clusters.size(); ++k) {
+    unsigned next = static_cast<unsigned>(run.byte_end);
+    if (!run.rtl && k + 1 < clusters.size()) next = starts[k + 1];
+    if (run.rtl && k > 0) next = starts[k - 1];
+    clusters[k].num_bytes = static_cast<int>(next - starts[k]);
   }
-  cairo_show_text_glyphs(cr, s.utf8.data(), total, glyphs.data(), static_cast<int>(glyphs.size()),
-                         clusters.data(), static_cast<int>(clusters.size()), flags);
+  const auto flags = run.rtl ? CAIRO_TEXT_CLUSTER_FLAG_BACKWARD : static_cast<cairo_text_cluster_flags_t>(0);
+  if (run.rtl) std::reverse(clusters.begin(), clusters.end());  // backward: clusters listed from the run's end
+  cairo_show_text_glyphs(cr, s.utf8.data() + run.byte_begin, static_cast<int>(run.byte_end - run.byte_begin),
+                         glyphs.data(), static_cast<int>(glyphs.size()), clusters.data(),
+                         static_cast<int>(clusters.size()), flags);
+}
+
+void draw(cairo_t* cr, const TextItem& t) {
+  if (t.text.glyphs.empty()) return;
+  set_colour(cr, t.colour);
+  for (const auto& run : t.text.runs) draw_run(cr, t, run);
 }
 
 }  // namespace

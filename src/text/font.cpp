@@ -13,6 +13,7 @@
 #include <mutex>
 
 #include "base/diagnostic.h"
+#include "text/font_fallback.h"
 
 namespace forme {
 
@@ -38,13 +39,16 @@ const cairo_user_data_key_t kFtFaceKey{};
 
 }  // namespace
 
-std::shared_ptr<const Font> Font::open(const std::string& path) {
+std::shared_ptr<const Font> Font::open(const std::string& path, unsigned index,
+                                      std::shared_ptr<const FontFallback> fallback, FontStyle style) {
   std::shared_ptr<Font> f(new Font());
   f->path_ = path;
+  f->fallback_ = std::move(fallback);
+  f->style_ = style;
   {
     std::lock_guard lock(ft_mutex());
     FT_Face face = nullptr;
-    if (FT_New_Face(ft_library(), path.c_str(), 0, &face) != 0 || !face)
+    if (FT_New_Face(ft_library(), path.c_str(), static_cast<FT_Long>(index), &face) != 0 || !face)
       throw InputError(SourceLoc{path}, "cannot open font file (missing, unreadable or not a font)",
                        "check the path, or remove it to use the bundled fonts");
     if (!FT_IS_SCALABLE(face)) {
@@ -59,7 +63,7 @@ std::shared_ptr<const Font> Font::open(const std::string& path) {
 
   hb_blob_t* blob = hb_blob_create_from_file_or_fail(path.c_str());
   if (!blob) throw InputError(SourceLoc{path}, "cannot read font file");
-  hb_face_t* hface = hb_face_create(blob, 0);
+  hb_face_t* hface = hb_face_create(blob, index);
   hb_blob_destroy(blob);
   f->hb_font_ = hb_font_create(hface);
   hb_face_destroy(hface);
@@ -115,9 +119,10 @@ std::string find_font_dir(const std::string& executable_path) {
 
 FontSet open_bundled_fonts(const std::string& dir) {
   FontSet set;
-  set.regular = Font::open(dir + "/NotoSans-Regular.ttf");
-  set.bold = Font::open(dir + "/NotoSans-Bold.ttf");
-  set.italic = Font::open(dir + "/NotoSans-Italic.ttf");
+  auto fallback = std::make_shared<const FontFallback>();
+  set.regular = Font::open(dir + "/NotoSans-Regular.ttf", 0, fallback, FontStyle::regular);
+  set.bold = Font::open(dir + "/NotoSans-Bold.ttf", 0, fallback, FontStyle::bold);
+  set.italic = Font::open(dir + "/NotoSans-Italic.ttf", 0, fallback, FontStyle::italic);
   return set;
 }
 

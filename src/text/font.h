@@ -14,11 +14,17 @@ namespace forme {
 /// Weights and styles forme draws with.
 enum class FontStyle { regular, bold, italic };
 
+class FontFallback;
+
 class Font {
  public:
-  /// Opens `path`; throws InputError naming the file if it cannot be read
-  /// or is not a font.
-  static std::shared_ptr<const Font> open(const std::string& path);
+  /// Opens face `index` of `path` (collections hold several); throws
+  /// InputError naming the file if it cannot be read or is not a font.
+  /// Characters the face lacks are drawn from `fallback`'s fonts, in the
+  /// nearest `style`, when one is given.
+  static std::shared_ptr<const Font> open(const std::string& path, unsigned index = 0,
+                                          std::shared_ptr<const FontFallback> fallback = {},
+                                          FontStyle style = FontStyle::regular);
   ~Font();
   Font(const Font&) = delete;
   Font& operator=(const Font&) = delete;
@@ -35,6 +41,9 @@ class Font {
   double cap_height_em() const { return cap_height_em_; }
   /// True when the font maps this code point to a glyph.
   bool covers(char32_t cp) const;
+  /// Where characters this face lacks are looked for (may be null).
+  const FontFallback* fallback() const { return fallback_.get(); }
+  FontStyle style() const { return style_; }
 
  private:
   Font() = default;
@@ -44,6 +53,8 @@ class Font {
   _cairo_font_face* cairo_face_ = nullptr;
   unsigned upem_ = 1000;
   double ascent_em_ = 0.8, descent_em_ = 0.2, cap_height_em_ = 0.7;
+  std::shared_ptr<const FontFallback> fallback_;
+  FontStyle style_ = FontStyle::regular;
 };
 
 using FontRef = std::shared_ptr<const Font>;
@@ -60,7 +71,8 @@ struct FontSet {
 /// to the executable, then the source tree's fonts/ folder.
 std::string find_font_dir(const std::string& executable_path);
 
-/// Opens the bundled family (Noto Sans regular, bold, italic) from `dir`.
+/// Opens the bundled family (Noto Sans regular, bold, italic) from `dir`,
+/// with installed fonts (fontconfig) for the characters it lacks.
 FontSet open_bundled_fonts(const std::string& dir);
 
 }  // namespace forme

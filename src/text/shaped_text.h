@@ -16,17 +16,30 @@ struct ShapedGlyph {
   unsigned cluster = 0; ///< byte offset into the UTF-8 string
 };
 
-/// One line of text in one font and size, shaped and measured.
+/// Consecutive glyphs (in visual order) from one font and one direction,
+/// made from one span of the string's bytes.
+struct GlyphRun {
+  FontRef font;
+  bool rtl = false;
+  std::size_t glyph_begin = 0, glyph_end = 0;  ///< into ShapedText::glyphs
+  std::size_t byte_begin = 0, byte_end = 0;    ///< into ShapedText::utf8
+};
+
+/// One line of text in one font and size, shaped and measured. Characters
+/// the font lacks come from installed fonts (`runs` says which), and
+/// right-to-left runs are placed in visual order.
 struct ShapedText {
   std::string utf8;
-  FontRef font;
+  FontRef font;     ///< the font asked for; metrics below are its
   double size = 0;  ///< em size in points
-  std::vector<ShapedGlyph> glyphs;
+  std::vector<ShapedGlyph> glyphs;  ///< left to right as drawn
+  std::vector<GlyphRun> runs;       ///< left to right as drawn; cover `glyphs`
+  std::vector<char32_t> missing;    ///< characters no installed font can draw
   double width = 0;    ///< sum of advances, points
   double ascent = 0;   ///< font ascender at this size (positive, points)
   double descent = 0;  ///< font descender at this size (positive, points)
   double cap_height = 0;
-  bool rtl = false;
+  bool rtl = false;  ///< the line's paragraph direction is right to left
 
   double height() const { return ascent + descent; }
 };
@@ -37,8 +50,10 @@ struct ShapeOptions {
   bool kerning = true;           ///< 'kern'
 };
 
-/// Shapes `utf8` with HarfBuzz. Invalid UTF-8 is replaced by U+FFFD by
-/// HarfBuzz; the run's direction and script are guessed from the text.
+/// Shapes one line of `utf8` with HarfBuzz: split into runs by bidi level
+/// (UAX #9), script and font (the asked-for font, else an installed one
+/// that has the character), each run shaped with its own direction and
+/// script, runs set in visual order. Invalid UTF-8 becomes U+FFFD.
 ShapedText shape_text(const std::string& utf8, const FontRef& font, double size,
                       const ShapeOptions& options = {});
 
