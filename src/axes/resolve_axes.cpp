@@ -7,6 +7,7 @@
 #include "axes/axis.h"
 #include "data/dates.h"
 #include "scale/date_ticks.h"
+#include "scale/power_of_ten.h"
 #include "scale/scale.h"
 #include "scale/ticks.h"
 
@@ -89,6 +90,21 @@ void finish_number_format(Axis& a, const std::optional<NumberFormat>& fmt, int t
   }
 }
 
+// Nice ticks, even for data near the largest double: such an extent (whose
+// span may not even be a finite double) is ticked after scaling it down by
+// its power of ten, and the ticks scaled back up; ticks beyond the largest
+// double are dropped, so the axis then ends at the data.
+Ticks ticks_within_doubles(Extent e) {
+  const double magnitude = std::max(std::abs(e.lo), std::abs(e.hi));
+  if (magnitude < 1e300 && std::isfinite(e.hi - e.lo)) return extended_ticks(e.lo, e.hi, kWantedTicks, false);
+  const int power = static_cast<int>(std::floor(std::log10(magnitude)));
+  Ticks t = extended_ticks(times_power_of_ten(e.lo, -power), times_power_of_ten(e.hi, -power), kWantedTicks, false);
+  for (double& v : t.values) v = times_power_of_ten(v, power);
+  t.step = times_power_of_ten(t.step, power);
+  std::erase_if(t.values, [](double v) { return !std::isfinite(v); });
+  return t;
+}
+
 Axis number_axis(Extent e, bool from_zero, const AxisSpec& spec) {
   Axis a;
   a.kind = AxisKind::number;
@@ -102,8 +118,23 @@ Axis number_axis(Extent e, bool from_zero, const AxisSpec& spec) {
     double pad = e.lo == 0 ? 1 : std::abs(e.lo) * 0.1;
     e = {from_zero && e.lo >= 0 ? 0 : e.lo - pad, e.hi + pad};
   }
-  Ticks t = extended_ticks(e.lo, e.hi, kWantedTicks, false);
-  finish_number_format(a, spec.format, t.decimals);
+  Ticks t = ticks_within_doubles(e);
+  std::optional<NumberFormat> format = spec.format;
+  const bool asked_power = format && format->style == NumberFormat::Style::power_of_ten;
+  if ((!format || asked_power) && t.values.size() >= 2) {
+    // Very large or very small values are written against a power of ten
+    // (that of the largest tick), as is any axis whose author asks for it.
+    double largest = 0;
+    for (double v : t.values) largest = std::max(largest, std::abs(v));
+    NumberFormat automatic = automatic_format(largest, t.values[1] - t.values[0], asked_power);
+    if (asked_power) {
+      format->exponent = automatic.exponent;
+      if (format->decimals < 0) format->decimals = automatic.decimals;
+    } else if (automatic.style != NumberFormat::Style::plain) {
+      format = automatic;
+    }
+  }
+  finish_number_format(a, format, t.decimals);
   a.lo = std::min(e.lo, t.values.empty() ? e.lo : t.values.front());
   a.hi = std::max(e.hi, t.values.empty() ? e.hi : t.values.back());
   for (double v : t.values) a.ticks.push_back({v, format_number(v, a.format), false});

@@ -4,6 +4,7 @@
 
 #include "axes/axis.h"
 #include "base/geometry.h"
+#include "scale/scale.h"
 
 namespace forme {
 
@@ -14,7 +15,7 @@ struct PlotFrame {
   /// Position of `v` along an axis as a fraction 0..1 of its length.
   static double frac(const Axis& a, double v) {
     if (a.log) return (std::log10(v) - std::log10(a.lo)) / (std::log10(a.hi) - std::log10(a.lo));
-    return (v - a.lo) / (a.hi - a.lo);
+    return LinearScale{a.lo, a.hi, 0, 1}.map(v);  // safe for spans beyond the largest double
   }
   double px(double v) const { return plot.x + frac(x, v) * plot.w; }
   /// y grows upwards in data, downwards on the page; category axes list

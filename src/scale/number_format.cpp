@@ -131,6 +131,14 @@ std::string apply_si(Decimal& d, int decimals) {
   }
 }
 
+/// "×10" and the power in superscript digits: 10³⁰⁸, 10⁻⁶.
+std::string times_power_of_ten_text(int power) {
+  static constexpr const char* kSuperscript[] = {"⁰", "¹", "²", "³", "⁴", "⁵", "⁶", "⁷", "⁸", "⁹"};
+  std::string digits;
+  for (char c : std::to_string(std::abs(power))) digits += kSuperscript[c - '0'];
+  return std::string("×10") + (power < 0 ? "⁻" : "") + digits;
+}
+
 }  // namespace
 
 std::string format_number(double v, const NumberFormat& f) {
@@ -153,10 +161,28 @@ std::string format_number(double v, const NumberFormat& f) {
     case NumberFormat::Style::si:
       unit = apply_si(d, f.decimals);
       break;
+    case NumberFormat::Style::power_of_ten:
+      if (!d.zero()) d.exponent -= f.exponent;
+      unit = times_power_of_ten_text(f.exponent);
+      break;
   }
   if (f.decimals >= 0) round_to(d, f.decimals);
-  if (d.zero()) negative = false;
+  if (d.zero()) {
+    negative = false;
+    if (f.style == NumberFormat::Style::power_of_ten) unit.clear();  // "0", not "0×10³⁰⁸"
+  }
   return (negative ? kMinus : "") + f.prefix + render(d, f.decimals, f) + unit + f.suffix;
+}
+
+NumberFormat automatic_format(double largest_magnitude, double step, bool always) {
+  NumberFormat f;
+  if (!std::isfinite(largest_magnitude) || largest_magnitude <= 0) return f;
+  const int order = shortest_decimal(largest_magnitude).order();
+  if (!always && order < 15 && order >= -5) return f;
+  f.style = NumberFormat::Style::power_of_ten;
+  f.exponent = order;
+  f.decimals = decimals_for_step(times_power_of_ten(step, -order));
+  return f;
 }
 
 int decimals_for_step(double step) {

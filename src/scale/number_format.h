@@ -17,6 +17,7 @@ struct NumberFormat {
     percent,  ///< value already in percent units: 12.5 -> "12.5%"
     fraction_percent, ///< value is a fraction: 0.125 -> "12.5%"
     si,       ///< 12.3k, 4.5M, 1.2G (and m, µ for small values)
+    power_of_ten,  ///< 1.5×10³⁰⁸: the mantissa of v / 10^`exponent`
   };
   Style style = Style::plain;
   int decimals = -1;          ///< fixed digits after the point; -1 = shortest exact
@@ -25,6 +26,7 @@ struct NumberFormat {
   std::string decimal_separator = ".";
   std::string prefix;         ///< e.g. "£"
   std::string suffix;         ///< e.g. " t"
+  int exponent = 0;           ///< power_of_ten: the power every value is written against
 };
 
 /// Formats `v`. Negative numbers use the Unicode minus sign (U+2212), as
@@ -36,7 +38,17 @@ struct NumberFormat {
 /// mantissa in [1, 1000) — after rounding, so 999,960 with one decimal is
 /// "1.0M" — and stays at T or µ beyond them (2,500T). Zero has no prefix.
 /// NaN prints as "NaN" and infinities as "∞" / "−∞", with prefix and suffix.
+/// Power of ten writes every value against one stated power so a column of
+/// ticks lines up: 0, 0.5×10³⁰⁸, 1.0×10³⁰⁸ (zero stays "0").
 std::string format_number(double v, const NumberFormat& f);
+
+/// The style an axis takes when its author chose none: plain, unless the
+/// largest tick is so large (≥ 10^15) or so small (< 10^-5) that plain
+/// digits would run to many characters; then power of ten, against the
+/// largest tick's power, with enough mantissa decimals to tell ticks `step`
+/// apart. `always` chooses power of ten whatever the size (for an author
+/// who asked for it).
+NumberFormat automatic_format(double largest_magnitude, double step, bool always = false);
 
 /// The number of decimals needed so every tick of `step` prints distinctly:
 /// the fewest (from the step's leading digit on) that show the step exactly

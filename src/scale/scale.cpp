@@ -20,7 +20,11 @@ double position(double t, double r0, double r1) { return std::lerp(r0, r1, t); }
 
 double LinearScale::map(double x) const {
   if (d0 == d1) return (r0 + r1) / 2;
-  return position((x - d0) / (d1 - d0), r0, r1);
+  const double span = d1 - d0;
+  // A domain wider than the largest double (−1e308 to 1.7e308) is mapped
+  // at half scale, which is exact in binary floating point.
+  if (!std::isfinite(span)) return position((x / 2 - d0 / 2) / (d1 / 2 - d0 / 2), r0, r1);
+  return position((x - d0) / span, r0, r1);
 }
 
 double LinearScale::invert(double r) const {

@@ -152,3 +152,34 @@ TEST_CASE("decimals_for_step shows each tick of the step exactly", "[scale][form
   CHECK(decimals_for_step(std::numeric_limits<double>::quiet_NaN()) == 0);
   CHECK(decimals_for_step(std::numeric_limits<double>::infinity()) == 0);
 }
+
+TEST_CASE("power of ten writes every value against one stated power", "[scale][format]") {
+  NumberFormat f;
+  f.style = Style::power_of_ten;
+  f.exponent = 308;
+  f.decimals = 1;
+  // 1.5e308 = 1.5 × 10^308, written with superscript digits (U+00B3, U+2070, U+2078).
+  CHECK(format_number(1.5e308, f) == "1.5×10³⁰⁸");
+  CHECK(format_number(5e307, f) == "0.5×10³⁰⁸");
+  CHECK(format_number(-1e308, f) == "\u22121.0×10³⁰⁸");
+  CHECK(format_number(0.0, f) == "0.0");  // zero needs no power
+  f.exponent = -6;
+  f.decimals = 0;
+  // 2.5e-6 rounds half away from zero to 3 × 10^-6 (superscript minus U+207B).
+  CHECK(format_number(2.5e-6, f) == "3×10⁻⁶");
+}
+
+TEST_CASE("axes choose a power of ten only for very large or very small values", "[scale][format]") {
+  using forme::automatic_format;
+  // forme's own thresholds: plain digits below 10^15 and down to 10^-5.
+  CHECK(automatic_format(9e14, 1e14).style == Style::plain);
+  CHECK(automatic_format(1e-5, 2e-6).style == Style::plain);
+  const NumberFormat big = automatic_format(1.5e308, 5e307);
+  CHECK(big.style == Style::power_of_ten);
+  CHECK(big.exponent == 308);
+  CHECK(big.decimals == 1);  // a step of 0.5 × 10^308 needs one decimal
+  const NumberFormat small = automatic_format(4e-7, 1e-7);
+  CHECK(small.exponent == -7);
+  CHECK(small.decimals == 0);
+  CHECK(automatic_format(1e3, 1e2, true).exponent == 3);  // asked for by the author
+}

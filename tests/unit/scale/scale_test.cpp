@@ -90,3 +90,11 @@ TEST_CASE("log ticks at 1, 2, 5 (or every multiple) in short spans", "[scale][sc
   // Between two whole multiples: linear ticks inside the domain.
   CHECK(LogScale{3.1, 3.9, 0, 1}.ticks(5) == V{3.1, 3.3, 3.5, 3.7, 3.9});
 }
+
+TEST_CASE("a linear domain wider than the largest double still maps in order", "[scale]") {
+  // -1e308 .. 1.7e308 spans 2.7e308, beyond DBL_MAX ≈ 1.798e308 (IEEE 754 binary64).
+  const forme::LinearScale s{-1e308, 1.7e308, 0, 270};
+  CHECK(s.map(-1e308) == Approx(0));
+  CHECK(s.map(0) == Approx(100));
+  CHECK(s.map(1.7e308) == Approx(270));
+}
