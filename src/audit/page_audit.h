@@ -6,6 +6,7 @@
 
 #include "axes/axis.h"
 #include "base/diagnostic.h"
+#include "base/limits.h"
 #include "describe/page_spec.h"
 #include "paint/display_list.h"
 #include "series/panel_data.h"
@@ -20,7 +21,9 @@ inline constexpr std::size_t kMaxSeriesPerPanel = 6;
 void audit_page(const PageSpec& spec, const std::vector<PanelData>& panels, const std::vector<PanelAxes>& axes,
                 DiagnosticSink& findings);
 
-/// Checks the laid-out page: text that overlaps other text, text below 6 pt.
-void audit_layout(const PageSpec& spec, const DisplayPage& page, DiagnosticSink& findings);
+/// Checks the laid-out page: text that overlaps other text, text below 6 pt;
+/// more than `limits.labels` labels on the page is an error.
+void audit_layout(const PageSpec& spec, const DisplayPage& page, DiagnosticSink& findings,
+                  const Limits& limits = {});
 
 }  // namespace forme

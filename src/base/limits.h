@@ -9,6 +9,9 @@
 /// kilobytes; a chart with a million points cannot be read in print) and
 /// small enough that a refused input costs milliseconds.
 #include <cstddef>
+#include <string>
+#include <string_view>
+#include <vector>
 
 namespace forme {
 
@@ -36,14 +39,26 @@ struct Limits {
   /// Largest CSV table file accepted, in bytes.
   std::size_t table_bytes = 256u * 1024 * 1024;
 
-  // --- later stages (recorded here; not yet enforced: the stages have no
-  //     Limits parameter yet, see tests/bad/KNOWN-GAPS.md) ----------------
-  /// Pages per output file (forme renders one page per description today).
-  std::size_t pages = 1;
-  /// Most points in one series.
-  std::size_t points_per_series = 1'000'000;
-  /// Most direct labels placed on one page.
+  // --- later stages -------------------------------------------------------
+  /// Pages per output document (enforced where a document is composed).
+  std::size_t pages = 5'000;
+  /// Most points in one series (enforced by series/select_series).
+  std::size_t points_per_series = 2'000'000;
+  /// Most labels (everything but headings, axis text and notes) on one page
+  /// (enforced by audit/audit_layout).
   std::size_t labels = 10'000;
 };
+
+/// The limits by the names the command line uses (`--limit NAME=N`), with
+/// what each bounds, in declaration order.
+struct LimitName {
+  const char* name;
+  const char* what;
+};
+const std::vector<LimitName>& limit_names();
+
+/// Sets one limit from "NAME=N" (N a positive whole number). Returns an
+/// empty string on success, else a one-line reason naming the valid names.
+std::string set_limit(Limits& limits, std::string_view assignment);
 
 }  // namespace forme

@@ -60,8 +60,8 @@ int render(forme::RenderOptions& options, const char* argv0) {
   return r.ok ? 0 : kExitInput;
 }
 
-int check(const std::string& page, bool strict, const char* argv0) {
-  forme::RenderResult r = forme::check_file(page, forme::find_font_dir(argv0));
+int check(const std::string& page, bool strict, const forme::Limits& limits, const char* argv0) {
+  forme::RenderResult r = forme::check_file(page, forme::find_font_dir(argv0), limits);
   const bool errors = print_diagnostics(r.diagnostics);
   if (errors || !r.ok) return kExitInput;
   if (strict && has_warnings(r.diagnostics)) return kExitInput;
@@ -90,7 +90,8 @@ int main(int argc, char** argv) {
 
   // Usage errors read like every other forme error, one line and a hint.
   auto usage_message = [](const CLI::App* a, const CLI::Error& e) {
-    std::string name = a->get_name().empty() ? "forme" : "forme " + a->get_name();
+    // The root command's name is argv[0], which may be a path: say "forme".
+    std::string name = a->get_parent() == nullptr ? "forme" : "forme " + a->get_name();
     return "forme: error: " + std::string(e.what()) + "\n  hint: run '" + name + " --help'\n";
   };
   app.failure_message(usage_message);
@@ -107,6 +108,19 @@ int main(int argc, char** argv) {
       "check", "Read a page, resolve its data and scales without painting, and list what could mislead.");
   check_cmd->add_option("page", check_page, "page description (YAML)")->required();
   check_cmd->add_flag("--strict", strict, "treat warnings as failures (exit 1)");
+
+  // --limit NAME=N, on both commands that read pages (base/limits.h).
+  std::vector<std::string> limit_settings;
+  std::string limit_help = "raise or lower a limit, as NAME=N; limits:";
+  for (const auto& l : forme::limit_names()) limit_help += std::string("\n  ") + l.name + ": " + l.what;
+  const CLI::Validator valid_limit(
+      [](std::string& text) {
+        forme::Limits scratch;
+        return forme::set_limit(scratch, text);
+      },
+      "NAME=N");
+  for (auto* sub : {render_cmd, check_cmd})
+    sub->add_option("--limit", limit_settings, limit_help)->check(valid_limit)->take_all();
 
   std::string fg, bg;
   auto* contrast_cmd = app.add_subcommand("contrast", "Print the WCAG 2.x contrast ratio of two colours.");
@@ -153,8 +167,11 @@ int main(int argc, char** argv) {
     return kExitUsage;
   }
 
+  forme::Limits limits;
+  for (const auto& setting : limit_settings) forme::set_limit(limits, setting);  // checked while parsing
+  render_options.limits = limits;
   if (*render_cmd) return render(render_options, argv[0]);
-  if (*check_cmd) return check(check_page, strict, argv[0]);
+  if (*check_cmd) return check(check_page, strict, limits, argv[0]);
   if (*contrast_cmd) return forme::run_contrast(fg, bg, std::cout, std::cerr);
   if (*palette_cmd) return forme::run_palette(palette_name, std::cout, std::cerr);
   if (*new_cmd) return make_starter(starter_kind, starter_dir);

@@ -111,7 +111,7 @@ ComposedDocument compose_document(const std::string& page_path, const std::strin
     throw InputError(errors.front());
   }
   std::vector<Table> tables = load_tables(*spec, limits);                   // 2. load data
-  std::vector<PanelData> panels = select_series(*spec, tables, sink);
+  std::vector<PanelData> panels = select_series(*spec, tables, sink, limits);
   std::vector<PanelAxes> axes = resolve_axes(panels, spec->grid, sink); // 3. resolve scales
   audit_page(*spec, panels, axes, sink);
   PageStyle style = style_for(*spec, font_dir);                     // 4. measure text (fonts)
@@ -125,7 +125,7 @@ ComposedDocument compose_document(const std::string& page_path, const std::strin
   if (spec->sheet.height_from_content) spec->sheet.height = content_height(*spec, panels, axes, style);
   ComposedDocument doc;
   doc.pages.push_back(layout_page(*spec, panels, axes, style, sink)); // 5-6. lay out, place labels
-  audit_layout(*spec, doc.pages.front(), sink);
+  audit_layout(*spec, doc.pages.front(), sink, limits);
   audit_missing_glyphs(*spec, doc.pages.front(), sink);
   for (const auto& d : sink.items())
     if (d.severity == Severity::error) throw InputError(d);  // reported already; stops the write
@@ -133,6 +133,11 @@ ComposedDocument compose_document(const std::string& page_path, const std::strin
   const std::vector<PlottedRows> plotted = plotted_rows(*spec, panels, tables);
   if (spec->data.table_page)
     for (auto& p : data_table_pages(*spec, plotted, style)) doc.pages.push_back(std::move(p));
+  if (doc.pages.size() > limits.pages)
+    throw InputError(spec->loc,
+                     "the document would have " + std::to_string(doc.pages.size()) + " pages, more than the " +
+                         std::to_string(limits.pages) + " one document may hold",
+                     "filter the rows set in the table pages, or raise the limit with '--limit pages=N'");
   doc.info = document_info(*spec, plotted);
   doc.info.description = describe_chart(*spec, panels, axes);
   // Last, the press sheet around each trimmed page: bleed, marks, slug.

@@ -102,7 +102,7 @@ struct PanelSpec {
   std::string title;
   AxisSpec x_axis, y_axis;
   /// Rows kept: column → wanted cell text (all must match).
-  std::vector<std::pair<Located, std::string>> where;
+  std::vector<std::pair<Located, Located>> where;
   TransformSpec transform;
   std::vector<ReferenceLine> references;
   Trend trend = Trend::none;
@@ -175,6 +175,8 @@ struct PageSpec {
   DataSpec data;
   double type_size = 0;  ///< base text size in points; 0 = from the job, else the sheet
   TypeSpec type;
+  SourceLoc heading_loc;  ///< the heading's title (or standfirst), blamed when it crowds out the panels
+  SourceLoc footer_loc;   ///< the source note (or notes, limitations), likewise
   SourceLoc loc;
 };
 

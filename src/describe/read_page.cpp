@@ -31,6 +31,7 @@ class Builder {
     if (auto h = r["heading"]) {
       p.title = str(h["title"]);
       p.standfirst = str(h["standfirst"]);
+      p.heading_loc = doc_.loc(h["title"] ? h["title"] : h["standfirst"] ? h["standfirst"] : h);
     }
     for (auto it = r["tables"].begin(); it != r["tables"].end(); ++it)
       p.tables.push_back(table(it->first.Scalar(), it->second, p.base_dir));
@@ -57,6 +58,18 @@ class Builder {
         for (const auto& l : links) p.source_links.push_back(url(l));
     }
     p.limitations = str(r["limitations"]);
+    {  // The footer's longest part is the one to shorten when it crowds the panels.
+      std::size_t notes_length = 0;
+      for (const auto& n : p.notes) notes_length += n.size();
+      const std::pair<const char*, std::size_t> parts[] = {
+          {"source", p.source.size()}, {"notes", notes_length}, {"limitations", p.limitations.size()}};
+      std::size_t longest = 0;
+      for (const auto& [key, length] : parts)
+        if (r[key] && (length > longest || !p.footer_loc.line)) {
+          longest = std::max(longest, length);
+          p.footer_loc = doc_.loc(r[key]);
+        }
+    }
     if (auto d = r["document"]) {
       p.document.author = str(d["author"]);
       p.document.subject = str(d["subject"]);
@@ -352,6 +365,7 @@ class Builder {
       if (s == "percent") return NumberFormat::Style::percent;
       if (s == "fraction-percent") return NumberFormat::Style::fraction_percent;
       if (s == "si") return NumberFormat::Style::si;
+      if (s == "power-of-ten") return NumberFormat::Style::power_of_ten;
       return NumberFormat::Style::plain;
     };
     if (n.IsScalar()) {
@@ -412,7 +426,7 @@ class Builder {
     if (auto w = n["where"]) {
       p.where.clear();
       for (auto it = w.begin(); it != w.end(); ++it)
-        p.where.push_back({located(it->first), it->second.Scalar()});
+        p.where.push_back({located(it->first), located(it->second)});
     }
     return p;
   }

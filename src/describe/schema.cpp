@@ -107,16 +107,16 @@ struct Schema {
        {"gap", &length, false, "space between panels"}});
 
   NodeSpec kind = choice("a chart kind", {"line", "vertical-bar", "horizontal-bar", "dot", "stacked-bar", "stacked-area"});
-  NodeSpec format_style = choice("a number style", {"plain", "percent", "fraction-percent", "si"});
+  NodeSpec format_style = choice("a number style", {"plain", "percent", "fraction-percent", "si", "power-of-ten"});
   NodeSpec format_map = mapping("a number format",
-      {{"style", &format_style, false, "plain, percent (values in %), fraction-percent (0.25 = 25%), si (k, M, G)"},
+      {{"style", &format_style, false, "plain, percent (values in %), fraction-percent (0.25 = 25%), si (k, M, G), power-of-ten (1.5×10⁹; chosen by itself for very large or small values)"},
        {"decimals", &integer, false, "fixed digits after the decimal point"},
        {"thousands", &boolean, false, "group thousands (default true)"},
        {"prefix", &text, false, "written before each number, e.g. a currency sign"},
        {"suffix", &text, false, "written after each number"}});
   NodeSpec format = [&] {
     NodeSpec n = format_map;
-    n.what = "a number style (plain, percent, fraction-percent, si) or a format mapping";
+    n.what = "a number style (plain, percent, fraction-percent, si, power-of-ten) or a format mapping";
     n.scalar_ok = true;
     n.scalar = ScalarType::choice;
     n.choices = format_style.choices;

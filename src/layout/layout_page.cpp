@@ -166,11 +166,27 @@ DisplayPage layout_page(const PageSpec& spec, const std::vector<PanelData>& pane
                            std::to_string(*alpha).substr(0, 5) + ")",
                        {}});
     }
-  if (plot_w < st.base * 4 || plot_h < st.base * 4)
-    throw InputError(spec.grid.loc,
-                     "the panels do not fit: each plot would be " + std::to_string(static_cast<int>(plot_w)) + " × " +
-                         std::to_string(static_cast<int>(plot_h)) + " pt",
+  if (plot_w < st.base * 4 || plot_h < st.base * 4) {
+    const std::string size = "each plot would be " + std::to_string(static_cast<int>(plot_w)) + " × " +
+                             std::to_string(static_cast<int>(plot_h)) + " pt";
+    // Blame what takes the room: a heading or footer using most of the
+    // page's height, else the grid itself.
+    const bool heading_crowds = head >= foot && head > content.h * 0.4 && spec.heading_loc.line;
+    const bool footer_crowds = foot > head && foot > content.h * 0.4 && spec.footer_loc.line;
+    const auto pt = [](double v) { return std::to_string(static_cast<int>(std::lround(v))); };
+    if (heading_crowds)
+      throw InputError(spec.heading_loc,
+                       "the heading takes " + pt(head) + " of the page's " + pt(content.h) +
+                           " pt of height, so the panels do not fit (" + size + ")",
+                       "shorten the heading, or use a larger sheet");
+    if (footer_crowds)
+      throw InputError(spec.footer_loc,
+                       "the footer takes " + pt(foot) + " of the page's " + pt(content.h) +
+                           " pt of height, so the panels do not fit (" + size + ")",
+                       "shorten the source, notes or limitations, or use a larger sheet");
+    throw InputError(spec.grid.loc, "the panels do not fit: " + size,
                      "use a larger sheet, fewer panels, smaller margins or a shorter heading");
+  }
 
   const SeriesColours colours = colour_series(panels, st);
   const bool name_series = [&] {

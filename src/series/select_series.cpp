@@ -177,10 +177,32 @@ std::vector<std::size_t> filter_rows(const PanelSpec& p, const Table& t) {
   std::vector<std::size_t> rows;
   for (std::size_t r = 0; r < t.rows; ++r) {
     bool keep = true;
-    for (std::size_t i = 0; i < cols.size() && keep; ++i) keep = cols[i]->text[r] == p.where[i].second;
+    for (std::size_t i = 0; i < cols.size() && keep; ++i) keep = cols[i]->text[r] == p.where[i].second.value;
     if (keep) rows.push_back(r);
   }
   return rows;
+}
+
+// Says which row filter left a panel empty, at the value written: the first
+// that no row matches on its own, else the filters together.
+void warn_empty_filter(const PanelSpec& p, const Table& t, const std::string& panel_name, DiagnosticSink& warnings) {
+  for (const auto& [name, value] : p.where) {
+    const Column& c = find_column(t, name, "a row filter");
+    if (std::find(c.text.begin(), c.text.end(), value.value) != c.text.end()) continue;
+    std::string hint = "the column's values run ";
+    if (t.rows == 0) hint = "the table has no rows";
+    else hint += "from '" + *std::min_element(c.text.begin(), c.text.end()) + "' to '" +
+                 *std::max_element(c.text.begin(), c.text.end()) + "'";
+    warnings.warn(value.loc,
+                  "no row of table '" + t.name + "' has " + name.value + " = '" + value.value + "', so " + panel_name +
+                      " is empty",
+                  hint);
+    return;
+  }
+  warnings.warn(p.where.front().second.loc,
+                "no row of table '" + t.name + "' matches all of the panel's 'where' filters, so " + panel_name +
+                    " is empty",
+                "each filter matches some rows on its own; check that they can hold together");
 }
 
 // Panels of one grid are read against one scale, so a category axis lists
@@ -209,7 +231,7 @@ void share_categories(std::vector<PanelData>& panels) {
 }  // namespace
 
 std::vector<PanelData> select_series(const PageSpec& page, const std::vector<Table>& tables,
-                                     DiagnosticSink& warnings) {
+                                     DiagnosticSink& warnings, const Limits& limits) {
   std::vector<PanelData> out;
   if (!page.grid.one_panel_per.empty()) {
     const PanelSpec& tmpl = page.panels.front();
@@ -241,12 +263,22 @@ std::vector<PanelData> select_series(const PageSpec& page, const std::vector<Tab
     }
   }
   share_categories(out);
+  for (const PanelData& d : out)
+    for (const auto& series : d.series)
+      if (series.x.size() > limits.points_per_series)
+        throw InputError(d.spec->y.loc,
+                         "series '" + (series.name.empty() ? d.spec->y.value : series.name) + "' has " +
+                             std::to_string(series.x.size()) +
+                             " points, more than the " + std::to_string(limits.points_per_series) +
+                             " one series may hold",
+                         "aggregate or filter the rows first, or raise the limit with "
+                         "'--limit points-per-series=N'");
   for (std::size_t i = 0; i < out.size(); ++i) {
     const PanelData& d = out[i];
+    if (d.rows_used > 0) continue;
     const std::string name = d.title.empty() ? "panel " + std::to_string(i + 1) : "panel '" + d.title + "'";
-    if (d.rows_used == 0)
-      warnings.warn(d.spec->loc, name + " has no data to show",
-                    "check its 'where' filter and the table's contents");
+    if (!d.spec->where.empty()) warn_empty_filter(*d.spec, find_table(page, tables, *d.spec), name, warnings);
+    else warnings.warn(d.spec->loc, name + " has no data to show", "check the table's contents");
   }
   if (out.empty()) throw InputError(page.grid.one_panel_per.loc, "no panels: the table has no rows to split");
   return out;

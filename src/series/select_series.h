@@ -5,6 +5,7 @@
 #include <vector>
 
 #include "base/diagnostic.h"
+#include "base/limits.h"
 #include "data/table.h"
 #include "describe/page_spec.h"
 #include "series/panel_data.h"
@@ -12,8 +13,9 @@
 namespace forme {
 
 /// Throws InputError located at the description value that is wrong
-/// (a missing column at its `x:` / `y:` value, …).
+/// (a missing column at its `x:` / `y:` value, …), and refuses a series of
+/// more than `limits.points_per_series` points at the panel's `y:`.
 std::vector<PanelData> select_series(const PageSpec& page, const std::vector<Table>& tables,
-                                     DiagnosticSink& warnings);
+                                     DiagnosticSink& warnings, const Limits& limits = {});
 
 }  // namespace forme
