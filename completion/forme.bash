@@ -21,6 +21,7 @@ _forme() {
   local commands="render check contrast palette schema new"
   local palettes="estuary fjord heath foreshore"
   local kinds="briefing report poster figure"
+  local limits="description-bytes= yaml-anchors= yaml-aliases= yaml-expanded-nodes= nesting-depth= panels= table-bytes= pages= points-per-series= labels="
 
   # The command is the first word after forme that is not an option.
   local i command=""
@@ -40,7 +41,7 @@ _forme() {
   local given=0
   for ((i = i + 1; i < cword; i++)); do
     case ${words[i]} in
-      -o | --output | --dpi) ((i++)) ;;
+      -o | --output | --dpi | --limit) ((i++)) ;;
       -*) ;;
       *) ((given++)) ;;
     esac
@@ -58,17 +59,25 @@ _forme() {
           COMPREPLY=($(compgen -W "72 150 300 600" -- "$cur"))
           return
           ;;
+        --limit)
+          COMPREPLY=($(compgen -W "$limits" -- "$cur"))
+          compopt -o nospace 2>/dev/null
+          return
+          ;;
       esac
       if [[ $cur == -* ]]; then
-        COMPREPLY=($(compgen -W "-o --output --dpi --help" -- "$cur"))
+        COMPREPLY=($(compgen -W "-o --output --dpi --limit --help" -- "$cur"))
       else
         COMPREPLY=($(compgen -f -X '!*.@(yaml|yml)' -- "$cur") $(compgen -d -- "$cur"))
         compopt -o filenames 2>/dev/null
       fi
       ;;
     check)
-      if [[ $cur == -* ]]; then
-        COMPREPLY=($(compgen -W "--strict --help" -- "$cur"))
+      if [[ $prev == --limit ]]; then
+        COMPREPLY=($(compgen -W "$limits" -- "$cur"))
+        compopt -o nospace 2>/dev/null
+      elif [[ $cur == -* ]]; then
+        COMPREPLY=($(compgen -W "--strict --limit --help" -- "$cur"))
       else
         COMPREPLY=($(compgen -f -X '!*.@(yaml|yml)' -- "$cur") $(compgen -d -- "$cur"))
         compopt -o filenames 2>/dev/null

@@ -10,6 +10,7 @@
 #include <set>
 #include <sstream>
 
+#include "base/limits.h"
 #include "cli/starters.h"
 #include "colour/palette.h"
 #include "support/outside_tools.h"
@@ -83,6 +84,12 @@ TEST_CASE("the bash completion parses and offers forme's own commands, palettes 
 
   const auto kinds = forme::starter_kinds();
   CHECK(offered("forme new ") == std::set<std::string>(kinds.begin(), kinds.end()));
+
+  // Limits: the names forme's own table gives --limit.
+  std::set<std::string> limits;
+  for (const auto& l : forme::limit_names()) limits.insert(std::string(l.name) + "=");
+  CHECK(offered("forme render page.yaml --limit ") == limits);
+  CHECK(offered("forme check --limit ") == limits);
 }
 
 TEST_CASE("cmake --install puts forme, its manual, completion and fonts under the prefix, and it renders",
