@@ -1,13 +1,19 @@
 #include "cli/colour_commands.h"
 
 #include <cstdio>
+#include <sstream>
 
+#include "base/diagnostic.h"
 #include "colour/audit.h"
 #include "colour/contrast.h"
 #include "colour/convert.h"
 #include "colour/palette.h"
 #include "colour/parse.h"
 #include "describe/suggest.h"
+#include "layout/page_style.h"
+#include "layout/palette_sheet.h"
+#include "paint/atomic_file.h"
+#include "paint/painter.h"
 
 namespace forme {
 
@@ -74,6 +80,36 @@ int run_palette(const std::string& name, std::ostream& out, std::ostream& err) {
     if (auto f = closest_pair(p->colours, v))
       out << "  " << to_string(v) << ": " << p->name << '.' << (f->first + 1) << " / " << p->name << '.' << (f->second + 1)
           << "  " << fixed(f->delta_e, 1) << '\n';
+  }
+  return 0;
+}
+
+int run_palette_sheet(const std::string& path, const std::string& font_dir, std::ostream& err) {
+  auto format = format_for_path(path);
+  if (!format) {
+    err << "forme: error: " << path << ": unknown output type\n  hint: name the sheet .png, .pdf or .svg\n";
+    return 1;
+  }
+  try {
+    PageStyle st;
+    st.fonts = open_bundled_fonts(font_dir);
+    st.base = 8;
+    st.ink = Inks{ink::text, ink::muted, ink::rule, ink::grid, Rgb{1, 1, 1}};
+    const DisplayPage page = palette_sheet(st);
+    std::ostringstream bytes;
+    PaintOptions po;
+    po.dpi = 110;
+    po.info.title = page.title;
+    po.info.creation_time = 0;  // the sheet depends on nothing but forme itself
+    auto painter = make_painter(*format, bytes, po);
+    painter->paint(page);
+    painter->finish();
+    AtomicFile file(path);
+    file.write(std::move(bytes).str());
+    file.commit();
+  } catch (const InputError& e) {
+    err << format_diagnostic(e.diagnostic()) << '\n';
+    return 1;
   }
   return 0;
 }

@@ -14,4 +14,9 @@ int run_contrast(const std::string& fg, const std::string& bg, std::ostream& out
 /// colour-vision deficiency and greyscale, the closest pair (CIEDE2000).
 int run_palette(const std::string& name, std::ostream& out, std::ostream& err);
 
+/// Writes the sheet of every palette under each simulated vision
+/// (layout/palette_sheet.h) to `path` (.png, .pdf or .svg). Returns the
+/// exit code.
+int run_palette_sheet(const std::string& path, const std::string& font_dir, std::ostream& err);
+
 }  // namespace forme
