@@ -66,7 +66,7 @@ _forme() {
           ;;
       esac
       if [[ $cur == -* ]]; then
-        COMPREPLY=($(compgen -W "-o --output --dpi --limit --help" -- "$cur"))
+        COMPREPLY=($(compgen -W "-o --output --dpi --limit --greyscale --help" -- "$cur"))
       else
         COMPREPLY=($(compgen -f -X '!*.@(yaml|yml)' -- "$cur") $(compgen -d -- "$cur"))
         compopt -o filenames 2>/dev/null
@@ -77,7 +77,7 @@ _forme() {
         COMPREPLY=($(compgen -W "$limits" -- "$cur"))
         compopt -o nospace 2>/dev/null
       elif [[ $cur == -* ]]; then
-        COMPREPLY=($(compgen -W "--strict --limit --help" -- "$cur"))
+        COMPREPLY=($(compgen -W "--strict --limit --greyscale --help" -- "$cur"))
       else
         COMPREPLY=($(compgen -f -X '!*.@(yaml|yml)' -- "$cur") $(compgen -d -- "$cur"))
         compopt -o filenames 2>/dev/null

@@ -60,8 +60,8 @@ int render(forme::RenderOptions& options, const char* argv0) {
   return r.ok ? 0 : kExitInput;
 }
 
-int check(const std::string& page, bool strict, const forme::Limits& limits, const char* argv0) {
-  forme::RenderResult r = forme::check_file(page, forme::find_font_dir(argv0), limits);
+int check(const std::string& page, bool strict, bool greyscale, const forme::Limits& limits, const char* argv0) {
+  forme::RenderResult r = forme::check_file(page, forme::find_font_dir(argv0), limits, greyscale);
   const bool errors = print_diagnostics(r.diagnostics);
   if (errors || !r.ok) return kExitInput;
   if (strict && has_warnings(r.diagnostics)) return kExitInput;
@@ -101,13 +101,17 @@ int main(int argc, char** argv) {
   render_cmd->add_option("page", render_options.page_path, "page description (YAML)")->required();
   render_cmd->add_option("-o,--output", render_options.output_path, "output file: .pdf, .svg or .png")->required();
   render_cmd->add_option("--dpi", render_options.dpi, "resolution of PNG output")->check(CLI::Range(10.0, 2400.0));
+  render_cmd->add_flag("--greyscale", render_options.greyscale,
+                       "paint in greys of the same lightness, for black-and-white printing");
 
   std::string check_page;
   bool strict = false;
+  bool check_greyscale = false;
   auto* check_cmd = app.add_subcommand(
       "check", "Read a page, resolve its data and scales without painting, and list what could mislead.");
   check_cmd->add_option("page", check_page, "page description (YAML)")->required();
   check_cmd->add_flag("--strict", strict, "treat warnings as failures (exit 1)");
+  check_cmd->add_flag("--greyscale", check_greyscale, "check the page as painted in grey for black-and-white printing");
 
   // --limit NAME=N, on both commands that read pages (base/limits.h).
   std::vector<std::string> limit_settings;
@@ -129,7 +133,10 @@ int main(int argc, char** argv) {
 
   std::string palette_name;
   auto* palette_cmd = app.add_subcommand("palette", "Show a palette with its distances under simulated colour vision.");
-  palette_cmd->add_option("name", palette_name, "palette name")->required();
+  std::string sheet_path;
+  palette_cmd->add_option("name", palette_name, "palette name");
+  palette_cmd->add_option("--sheet", sheet_path,
+                          "write a sheet of every palette under simulated colour vision (.png, .pdf or .svg)");
 
   auto* schema_cmd = app.add_subcommand(
       "schema", "Print a JSON Schema of the page description, for editors that check YAML as it is typed.");
@@ -171,9 +178,16 @@ int main(int argc, char** argv) {
   for (const auto& setting : limit_settings) forme::set_limit(limits, setting);  // checked while parsing
   render_options.limits = limits;
   if (*render_cmd) return render(render_options, argv[0]);
-  if (*check_cmd) return check(check_page, strict, limits, argv[0]);
+  if (*check_cmd) return check(check_page, strict, check_greyscale, limits, argv[0]);
   if (*contrast_cmd) return forme::run_contrast(fg, bg, std::cout, std::cerr);
-  if (*palette_cmd) return forme::run_palette(palette_name, std::cout, std::cerr);
+  if (*palette_cmd) {
+    if (!sheet_path.empty()) return forme::run_palette_sheet(sheet_path, forme::find_font_dir(argv[0]), std::cerr);
+    if (palette_name.empty()) {
+      std::cerr << "forme: error: name a palette, or give --sheet FILE\n  hint: run 'forme palette --help'\n";
+      return kExitUsage;
+    }
+    return forme::run_palette(palette_name, std::cout, std::cerr);
+  }
   if (*new_cmd) return make_starter(starter_kind, starter_dir);
   if (*schema_cmd) {
     std::cout << forme::json_schema_text(forme::page_schema());

@@ -11,6 +11,7 @@
 #include <sstream>
 
 #include "audit/missing_glyphs.h"
+#include "audit/colour_audit.h"
 #include "audit/page_audit.h"
 #include "axes/axis.h"
 #include "cli/signal_cleanup.h"
@@ -22,6 +23,7 @@
 #include "layout/page_style.h"
 #include "layout/press_sheet.h"
 #include "paint/atomic_file.h"
+#include "paint/greyscale.h"
 #include "paint/pdf_dates.h"
 #include "layout/data_table_page.h"
 #include "series/plotted_rows.h"
@@ -103,7 +105,7 @@ void pause_for_tests() {
 }  // namespace
 
 ComposedDocument compose_document(const std::string& page_path, const std::string& font_dir, DiagnosticSink& sink,
-                                  const Limits& limits) {
+                                  const Limits& limits, bool greyscale) {
   std::vector<Diagnostic> errors;
   std::optional<PageSpec> spec = read_page(page_path, errors, limits);  // 1. read description
   if (!spec) {
@@ -127,6 +129,9 @@ ComposedDocument compose_document(const std::string& page_path, const std::strin
   doc.pages.push_back(layout_page(*spec, panels, axes, style, sink)); // 5-6. lay out, place labels
   audit_layout(*spec, doc.pages.front(), sink, limits);
   audit_missing_glyphs(*spec, doc.pages.front(), sink);
+  greyscale = greyscale || spec->greyscale;  // for black-and-white printing
+  if (greyscale) doc.pages.front() = in_greyscale(std::move(doc.pages.front()));
+  audit_colours(*spec, panels, doc.pages.front(), greyscale, sink);
   for (const auto& d : sink.items())
     if (d.severity == Severity::error) throw InputError(d);  // reported already; stops the write
   // What travels with the chart: the rows plotted, the page in words.
@@ -140,24 +145,30 @@ ComposedDocument compose_document(const std::string& page_path, const std::strin
                      "filter the rows set in the table pages, or raise the limit with '--limit pages=N'");
   doc.info = document_info(*spec, plotted);
   doc.info.description = describe_chart(*spec, panels, axes);
+  // Each panel in words, for the tagged PDF's figure alternate text.
+  auto& figures = doc.pages.front().figures;
+  for (std::size_t i = 0; i < figures.size() && i < panels.size(); ++i)
+    figures[i].alt = describe_chart(*spec, {panels[i]}, {axes[i]});
   // Last, the press sheet around each trimmed page: bleed, marks, slug.
   const PressSpec& press = spec->sheet.press;
   const long long today = parse_source_date_epoch(std::getenv("SOURCE_DATE_EPOCH")).value_or(std::time(nullptr));
   for (std::size_t i = 0; i < doc.pages.size(); ++i) {
     const std::string slug = press.slug.empty() ? std::string() : slug_line(press.slug, today, i + 1, doc.pages.size());
     doc.pages[i] = to_press_sheet(std::move(doc.pages[i]), press, style, slug);
+    // The press sheet's paper colour and marks print in grey too.
+    if (greyscale) doc.pages[i] = in_greyscale(std::move(doc.pages[i]));
   }
   return doc;
 }
 
 DisplayPage compose_page(const std::string& page_path, const std::string& font_dir, DiagnosticSink& sink,
-                         const Limits& limits) {
-  return std::move(compose_document(page_path, font_dir, sink, limits).pages.front());
+                         const Limits& limits, bool greyscale) {
+  return std::move(compose_document(page_path, font_dir, sink, limits, greyscale).pages.front());
 }
 
 std::string render_to_bytes(const std::string& page_path, OutputFormat format, const std::string& font_dir,
-                            double dpi, DiagnosticSink& warnings, const Limits& limits) {
-  ComposedDocument doc = compose_document(page_path, font_dir, warnings, limits);
+                            double dpi, DiagnosticSink& warnings, const Limits& limits, bool greyscale) {
+  ComposedDocument doc = compose_document(page_path, font_dir, warnings, limits, greyscale);
   std::ostringstream out;
   PaintOptions po;
   po.dpi = dpi;
@@ -192,10 +203,11 @@ bool collect(DiagnosticSink& sink, const std::string& page_path, Work&& work) {
 
 }  // namespace
 
-RenderResult check_file(const std::string& page_path, const std::string& font_dir, const Limits& limits) {
+RenderResult check_file(const std::string& page_path, const std::string& font_dir, const Limits& limits,
+                        bool greyscale) {
   RenderResult r;
   DiagnosticSink sink;
-  r.ok = collect(sink, page_path, [&] { compose_page(page_path, font_dir, sink, limits); });
+  r.ok = collect(sink, page_path, [&] { compose_page(page_path, font_dir, sink, limits, greyscale); });
   r.diagnostics = sink.items();
   return r;
 }
@@ -210,7 +222,7 @@ RenderResult render_file(const RenderOptions& o) {
     std::error_code ec;
     if (std::filesystem::equivalent(o.output_path, o.page_path, ec))
       throw InputError(SourceLoc{o.output_path}, "output would overwrite the page description");
-    std::string bytes = render_to_bytes(o.page_path, *format, o.font_dir, o.dpi, sink, o.limits);
+    std::string bytes = render_to_bytes(o.page_path, *format, o.font_dir, o.dpi, sink, o.limits, o.greyscale);
     CleanupPathScope forget_temp;
     std::optional<AtomicFile> file;
     {

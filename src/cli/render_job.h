@@ -18,6 +18,7 @@ struct RenderOptions {
   double dpi = 150;
   std::string font_dir;  ///< bundled fonts folder
   Limits limits;         ///< what one run accepts (base/limits.h)
+  bool greyscale = false;  ///< paint in grey for black-and-white printing (as the page's colours.greyscale)
 };
 
 struct RenderResult {
@@ -37,7 +38,8 @@ RenderResult render_file(const RenderOptions& options);
 
 /// Runs every stage up to painting and reports every finding (errors and
 /// warnings) without writing anything: `forme check`.
-RenderResult check_file(const std::string& page_path, const std::string& font_dir, const Limits& limits = {});
+RenderResult check_file(const std::string& page_path, const std::string& font_dir, const Limits& limits = {},
+                        bool greyscale = false);
 
 /// Everything one render paints: the chart page, then any data table
 /// pages, and the document information (metadata, description, attachments).
@@ -46,17 +48,18 @@ struct ComposedDocument {
   DocumentInfo info;
 };
 
-/// Runs every stage up to painting. Throws InputError.
+/// Runs every stage up to painting; `greyscale` (or the page's
+/// colours.greyscale) paints every page in grey. Throws InputError.
 ComposedDocument compose_document(const std::string& page_path, const std::string& font_dir,
-                                  DiagnosticSink& warnings, const Limits& limits = {});
+                                  DiagnosticSink& warnings, const Limits& limits = {}, bool greyscale = false);
 
 /// Runs every stage up to painting: the laid-out chart page (tests read its text
 /// positions). Throws InputError.
 DisplayPage compose_page(const std::string& page_path, const std::string& font_dir, DiagnosticSink& warnings,
-                         const Limits& limits = {});
+                         const Limits& limits = {}, bool greyscale = false);
 
 /// Renders to bytes in memory (tests, fuzzing). Throws InputError.
 std::string render_to_bytes(const std::string& page_path, OutputFormat format, const std::string& font_dir,
-                            double dpi, DiagnosticSink& warnings, const Limits& limits = {});
+                            double dpi, DiagnosticSink& warnings, const Limits& limits = {}, bool greyscale = false);
 
 }  // namespace forme

@@ -93,6 +93,32 @@ struct CalloutSpec {
   SourceLoc loc;
 };
 
+/// Dash of a line series, told apart from others without colour.
+enum class DashStyle { solid, long_dash, short_dash, dotted, dash_dot };
+/// Fill pattern of a bar series, drawn over its colour.
+enum class FillPattern { plain, hatch, back_hatch, cross_hatch, dots };
+
+/// One series' look as the author chose it.
+struct SeriesLookSpec {
+  Located name;                       ///< the series (a value of series-by)
+  std::optional<Rgb> colour;          ///< parsed already; loc of the value in `colour_loc`
+  SourceLoc colour_loc;
+  std::optional<DashStyle> dash;
+  std::optional<FillPattern> pattern;
+};
+
+/// How series are coloured: on the page, or for one panel (unset values
+/// fall back to the page's).
+struct ColourSpec {
+  Located palette;                    ///< a forme palette's name; empty = the page's (or estuary)
+  std::optional<double> midpoint;     ///< diverging: the value at the neutral middle (default 0)
+  SourceLoc midpoint_loc;
+  std::optional<bool> patterns;       ///< also tell series apart by dash (lines) and fill pattern (bars)
+  SourceLoc patterns_loc;
+  std::vector<SeriesLookSpec> series; ///< explicit looks by series name
+  SourceLoc loc;
+};
+
 enum class Trend { none, line, line_with_equation };
 enum class AspectRule { fill, bank_median_slope, bank_orientation };
 
@@ -111,6 +137,10 @@ struct PanelSpec {
   Located label_points_by;    ///< dot panels: column whose text names each point
   Located label_priority;     ///< number column: higher values are labelled first
   std::vector<CalloutSpec> callouts;
+  SourceLoc loc;
+};
+
+  ColourSpec colours;         ///< this panel's palette and series looks
   SourceLoc aspect_loc;
   SourceLoc loc;  ///< the panel mapping (or grid) this came from
 };
@@ -177,6 +207,8 @@ struct PageSpec {
   TypeSpec type;
   SourceLoc heading_loc;  ///< the heading's title (or standfirst), blamed when it crowds out the panels
   SourceLoc footer_loc;   ///< the source note (or notes, limitations), likewise
+  ColourSpec colours;    ///< the page's palette and series looks
+  bool greyscale = false;  ///< painted in grey, for black-and-white printing
   SourceLoc loc;
 };
 

@@ -96,6 +96,10 @@ class Builder {
         throw InputError(doc_.loc(t["size"]), "type size below 6pt cannot be read in print",
                          "use 6pt or more (common practice for printed figures)");
     }
+    if (auto c = r["colours"]) {
+      p.colours = colours(c, ColourSpec{});
+      if (c["greyscale"]) p.greyscale = c["greyscale"].Scalar() == "true";
+    }
     return p;
   }
 
@@ -423,12 +427,65 @@ class Builder {
                                                     : AspectRule::fill;
       p.aspect_loc = doc_.loc(a);
     }
+    if (auto c = n["colours"]) p.colours = colours(c, p.colours);
     if (auto w = n["where"]) {
       p.where.clear();
       for (auto it = w.begin(); it != w.end(); ++it)
         p.where.push_back({located(it->first), located(it->second)});
     }
     return p;
+  }
+
+  // Palette, midpoint, patterns and series looks; values not given keep
+  // those of `c` (the panel template's).
+  ColourSpec colours(const YAML::Node& n, ColourSpec c) {
+    c.loc = doc_.loc(n);
+    if (n["palette"]) c.palette = located(n["palette"]);
+    if (auto m = n["midpoint"]) {
+      c.midpoint = std::stod(m.Scalar());
+      c.midpoint_loc = doc_.loc(m);
+    }
+    if (auto pt = n["patterns"]) {
+      c.patterns = pt.Scalar() == "true";
+      c.patterns_loc = doc_.loc(pt);
+    }
+    if (auto list = n["series"])
+      for (auto it = list.begin(); it != list.end(); ++it) {
+        SeriesLookSpec look;
+        look.name = located(it->first);
+        const YAML::Node& v = it->second;
+        const YAML::Node colour_node = v.IsScalar() ? v : v["colour"];
+        if (colour_node) {
+          ParsedColour parsed = parse_colour(colour_node.Scalar());
+          if (!parsed.colour)
+            throw InputError(doc_.loc(colour_node), parsed.error, parsed.hint);
+          look.colour = parsed.colour;
+          look.colour_loc = doc_.loc(colour_node);
+        } else {
+          look.colour_loc = look.name.loc;
+        }
+        if (v.IsMap() && v["dash"]) look.dash = dash(v["dash"].Scalar());
+        if (v.IsMap() && v["pattern"]) look.pattern = pattern(v["pattern"].Scalar());
+        std::erase_if(c.series, [&](const SeriesLookSpec& s) { return s.name.value == look.name.value; });
+        c.series.push_back(std::move(look));
+      }
+    return c;
+  }
+
+  static DashStyle dash(const std::string& d) {
+    if (d == "long") return DashStyle::long_dash;
+    if (d == "short") return DashStyle::short_dash;
+    if (d == "dotted") return DashStyle::dotted;
+    if (d == "dash-dot") return DashStyle::dash_dot;
+    return DashStyle::solid;
+  }
+
+  static FillPattern pattern(const std::string& p) {
+    if (p == "hatch") return FillPattern::hatch;
+    if (p == "back-hatch") return FillPattern::back_hatch;
+    if (p == "cross-hatch") return FillPattern::cross_hatch;
+    if (p == "dots") return FillPattern::dots;
+    return FillPattern::plain;
   }
 
   void axis_extras(const YAML::Node& n, const std::string& axis, AxisSpec& a) {

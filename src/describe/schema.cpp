@@ -1,5 +1,7 @@
 #include "describe/schema.h"
 
+#include "colour/palette.h"
+
 namespace forme {
 
 namespace {
@@ -159,6 +161,48 @@ struct Schema {
        {"corner", &corner, false, "pin the note to this corner of the plot instead of letting forme place it"},
        {"offset", &text, false, "pin the note's centre this far from its target: two lengths, right and up, e.g. \"20mm 8mm\""}});
   NodeSpec callouts = list_of("a list of callouts", &callout);
+  NodeSpec palette_name = [&] {
+    std::vector<std::string_view> names;
+    for (const Palette& p : all_palettes()) names.push_back(p.name);
+    return choice("the name of one of forme's palettes", std::move(names));
+  }();
+  NodeSpec colour = scalar("a colour: #rrggbb, #rgb, oklch(L C H), a palette entry such as estuary.2, or ink.text",
+                           ScalarType::text);
+  NodeSpec dash = choice("a dash", {"solid", "long", "short", "dotted", "dash-dot"});
+  NodeSpec pattern = choice("a fill pattern", {"plain", "hatch", "back-hatch", "cross-hatch", "dots"});
+  NodeSpec series_look_map = mapping("a series' look",
+      {{"colour", &colour, false, "the series' colour"},
+       {"dash", &dash, false, "line series: solid, long, short, dotted or dash-dot"},
+       {"pattern", &pattern, false, "bar series: plain, hatch, back-hatch, cross-hatch or dots, drawn over the colour"}});
+  NodeSpec series_look = [&] {
+    NodeSpec n = series_look_map;
+    n.what = "a colour, or a mapping with colour, dash and pattern";
+    n.scalar_ok = true;
+    n.scalar = ScalarType::text;
+    return n;
+  }();
+  NodeSpec series_looks = [&] {
+    NodeSpec n = mapping("looks by series name", {});
+    n.any_key = &series_look;
+    return n;
+  }();
+  std::vector<KeySpec> colour_keys() const {
+    return {{"palette", &palette_name, false,
+             "estuary (series colours, the default), fjord or heath (graded, light to dark, for ordered series), "
+             "foreshore (diverging about a midpoint, for series named by numbers)"},
+            {"midpoint", &number, false, "diverging palettes: the series value drawn in the neutral middle (default 0)"},
+            {"patterns", &boolean, false,
+             "also tell series apart without colour: dashes for lines, fill patterns for bars, chosen in order"},
+            {"series", &series_looks, false, "colours, dashes and patterns of named series"}};
+  }
+  NodeSpec panel_colours = mapping("a panel's colours", colour_keys(), "this panel's palette and series looks");
+  NodeSpec page_colours = [&] {
+    NodeSpec n = mapping("the page's colours", colour_keys(), "the page's palette, series looks and greyscale printing");
+    n.keys.push_back({"greyscale", &boolean, false,
+                      "paint the page in greys of the same lightness, for black-and-white printing; "
+                      "series must then differ in lightness, dash or pattern"});
+    return n;
+  }();
   NodeSpec panel = mapping("a panel",
       {{"kind", &kind, false, "line, vertical-bar, horizontal-bar, dot, stacked-bar (one upright bar per category, a segment per series) or stacked-area (a band per series laid on the ones before it)"},
        {"table", &text, false, "name of a table under 'tables'"},
@@ -187,6 +231,7 @@ struct Schema {
        {"label-points-by", &text, false, "dot panels: a column whose text names each point; names that find no room are left out with a warning"},
        {"label-priority", &text, false, "with label-points-by: a number column; points with higher values are named first"},
        {"callouts", &callouts, false, "notes joined by a leader line to a point, a bar or a stretch of x"},
+       {"colours", &panel_colours, false, "this panel's palette and series looks (else the page's)"},
        {"y-right", &refused, false, "not available: forme refuses a second value axis"}});
   NodeSpec panels = list_of("a list of panels", &panel);
 
@@ -233,7 +278,8 @@ struct Schema {
        {"document", &document, false, "author, subject and keywords for the PDF's document information"},
        {"data", &data, false, "whether the PDF carries the plotted rows: attached CSV files, a table page"},
        {"type", &type, false, "type sizes: by job, by reading distance, or each stated"},
-       {"marks", &marks, false, "line widths, tick length and dot size (default: in proportion to the type)"}});
+       {"marks", &marks, false, "line widths, tick length and dot size (default: in proportion to the type)"},
+       {"colours", &page_colours, false, "palette, series colours, dashes and patterns, greyscale printing"}});
 };
 
 }  // namespace

@@ -11,6 +11,7 @@
 #include "layout/grid_shape.h"
 #include "layout/marks/marks.h"
 #include "layout/movable_text.h"
+#include "layout/series_looks.h"
 #include "layout/text_items.h"
 
 namespace forme {
@@ -44,15 +45,9 @@ std::vector<std::string> scale_notes(const std::vector<PanelAxes>& axes) {
   return {};
 }
 
-// The same series keeps its colour in every panel. A panel's lone unnamed
-// series takes the first colour.
-SeriesColours colour_series(const std::vector<PanelData>& panels, const PageStyle& st) {
+SeriesColours colours_of(const PanelLooks& looks) {
   SeriesColours out;
-  out[""] = st.series.front();
-  std::size_t next = 0;
-  for (const auto& p : panels)
-    for (const auto& s : p.series)
-      if (!out.count(s.name)) out[s.name] = st.series[next++ % st.series.size()];
+  for (const auto& [name, look] : looks.series) out[name] = look.colour;
   return out;
 }
 
@@ -188,7 +183,7 @@ DisplayPage layout_page(const PageSpec& spec, const std::vector<PanelData>& pane
                      "use a larger sheet, fewer panels, smaller margins or a shorter heading");
   }
 
-  const SeriesColours colours = colour_series(panels, st);
+  const std::vector<PanelLooks> looks = assign_looks(spec, panels);
   const bool name_series = [&] {
     for (const auto& p : panels)
       if (p.series.size() > 1) return true;
@@ -206,6 +201,7 @@ DisplayPage layout_page(const PageSpec& spec, const std::vector<PanelData>& pane
     y += m.top;
     PlotFrame f{{x, y, plot_w, plot_h}, axes[i].x, axes[i].y};
     page.plot_areas.push_back(f.plot);
+    page.figures.push_back({page.items.size(), page.items.size(), {}});
 
     // Panel title, then the y axis title with its unit, above the plot.
     double ty = y - m.top;
@@ -233,7 +229,9 @@ DisplayPage layout_page(const PageSpec& spec, const std::vector<PanelData>& pane
       moving.names.push_back({{f.px(s.x[n.point]), f.py(s.y[n.point])}, st.dot_radius() * 1.2, n.text, n.priority, n.loc});
     }
     draw_axis_backdrop(f, st, page);
-    const MarkContext ctx{panels[i], f, st, colours, name_series, &warnings};
+    const SeriesColours colours = colours_of(looks[i]);
+    MarkContext ctx{panels[i], f, st, colours, name_series, &warnings};
+    ctx.looks = &looks[i];
     draw_marks(ctx, page);
     draw_trend_lines(ctx, page, moving.choices);
     draw_reference_lines(ctx, page, moving.choices);
@@ -244,6 +242,7 @@ DisplayPage layout_page(const PageSpec& spec, const std::vector<PanelData>& pane
       page.add(text_at(std::move(t), f.plot.cx(), f.plot.bottom() + row_band[static_cast<std::size_t>(r)] + st.base * 0.3 + asc,
                        Align::centre, st.ink.muted, TextRole::axis_title));
     }
+    page.figures.back().end = page.items.size();
   }
   // 6. Movable text last, when every fixed text and mark on the page is known.
   place_movable_text(movables, st, page, warnings);

@@ -90,7 +90,10 @@ DisplayPage to_press_sheet(DisplayPage page, const PressSpec& press, const PageS
   if (d > 0) shift(page, d);
   const Rect trim{d, d, page.width, page.height};
   const Rect bleed = trim.inflate(g.bleed);
-  if (press.background) page.items.insert(page.items.begin(), rectangle(bleed, *press.background));
+  if (press.background) {
+    page.items.insert(page.items.begin(), rectangle(bleed, *press.background));
+    for (auto& f : page.figures) ++f.first, ++f.end;  // the panels' items moved up by one
+  }
   if (!press.any()) return page;
   page.width += 2 * d;
   page.height += 2 * d;

@@ -20,12 +20,24 @@ struct Stroke {
   bool round = false;            ///< round caps and joins (lines), else butt/miter
 };
 
+/// A vector pattern drawn over a filled shape, clipped to it: parallel
+/// lines (one or two directions) or a grid of dots.
+struct Hatch {
+  enum class Kind { lines, crossed, dots };
+  Kind kind = Kind::lines;
+  double angle = 45;   ///< degrees, counter-clockwise on the page, for lines
+  double spacing = 3;  ///< points between lines or dot centres
+  double width = 0.6;  ///< line width, or dot diameter, points
+  Rgb ink;
+};
+
 /// A polyline or polygon.
 struct PathItem {
   std::vector<Point> points;
   bool closed = false;
   std::optional<Rgb> fill;
   std::optional<Stroke> stroke;
+  std::optional<Hatch> hatch;  ///< closed shapes: pattern over the fill
 };
 
 struct CircleItem {
@@ -62,6 +74,13 @@ struct LinkArea {
 
 using DisplayItem = std::variant<PathItem, CircleItem, TextItem>;
 
+/// A run of items that together draw one panel: a figure in a tagged PDF
+/// (ISO 32000-1 §14.8.4.5), with alternate text (§14.9.3).
+struct FigureSpan {
+  std::size_t first = 0, end = 0;  ///< item indices [first, end)
+  std::string alt;                 ///< the panel in words
+};
+
 struct DisplayPage {
   double width = 0, height = 0;  ///< sheet size, points
   std::vector<DisplayItem> items;
@@ -78,6 +97,8 @@ struct DisplayPage {
   /// the cut (PDF TrimBox and BleedBox, ISO 32000-1 §14.11.2); unset when
   /// the sheet is the trimmed page itself.
   std::optional<Rect> trim_box, bleed_box;
+  /// Which items draw each panel, for the PDF's structure tree.
+  std::vector<FigureSpan> figures;
 
   void add(DisplayItem item) { items.push_back(std::move(item)); }
 };

@@ -3,6 +3,7 @@
 #include <cairo.h>
 
 #include <algorithm>
+#include <cmath>
 #include <vector>
 
 namespace forme {
@@ -32,11 +33,76 @@ void fill_and_stroke(cairo_t* cr, const std::optional<Rgb>& fill, const std::opt
   cairo_new_path(cr);
 }
 
-void draw(cairo_t* cr, const PathItem& p) {
-  if (p.points.empty()) return;
+void trace(cairo_t* cr, const PathItem& p) {
   cairo_move_to(cr, p.points[0].x, p.points[0].y);
   for (std::size_t i = 1; i < p.points.size(); ++i) cairo_line_to(cr, p.points[i].x, p.points[i].y);
   if (p.closed) cairo_close_path(cr);
+}
+
+// Parallel lines at `angle` through the box, `spacing` apart, anchored to
+// the page origin so neighbouring shapes' patterns line up.
+void hatch_lines(cairo_t* cr, double x0, double y0, double x1, double y1, double angle, double spacing) {
+  const double a = angle * 3.141592653589793 / 180;
+  const double dx = std::cos(a), dy = -std::sin(a);  // along the line (page y runs down)
+  const double nx = -dy, ny = dx;                    // across the lines
+  double lo = 1e300, hi = -1e300;
+  for (double x : {x0, x1})
+    for (double y : {y0, y1}) lo = std::min(lo, x * nx + y * ny), hi = std::max(hi, x * nx + y * ny);
+  const double reach = std::hypot(x1 - x0, y1 - y0) + spacing;
+  for (double d = std::floor(lo / spacing) * spacing; d <= hi + spacing; d += spacing) {
+    const double cx = nx * d + dx * (x0 * dx + y0 * dy), cy = ny * d + dy * (x0 * dx + y0 * dy);
+    const double span = reach + std::abs(x1 - x0) + std::abs(y1 - y0);
+    cairo_move_to(cr, cx - dx * span, cy - dy * span);
+    cairo_line_to(cr, cx + dx * span, cy + dy * span);
+  }
+}
+
+// The pattern is real vector drawing (strokes and dots under a clip), so it
+// stays sharp at any zoom and prints as line work.
+void draw_hatch(cairo_t* cr, const PathItem& p, const Hatch& h) {
+  double x0 = 1e300, y0 = 1e300, x1 = -1e300, y1 = -1e300;
+  for (const Point& pt : p.points) x0 = std::min(x0, pt.x), y0 = std::min(y0, pt.y), x1 = std::max(x1, pt.x), y1 = std::max(y1, pt.y);
+  cairo_save(cr);
+  trace(cr, p);
+  cairo_clip(cr);
+  set_colour(cr, h.ink);
+  if (h.kind == Hatch::Kind::dots) {
+    const double s = h.spacing;
+    for (double y = std::floor(y0 / s) * s; y <= y1 + s; y += s) {
+      // Alternate rows shift by half a step: an even, staggered field.
+      const bool odd = static_cast<long>(std::lround(y / s)) % 2 != 0;
+      for (double x = std::floor(x0 / s) * s + (odd ? s / 2 : 0); x <= x1 + s; x += s) {
+        cairo_new_sub_path(cr);
+        cairo_arc(cr, x, y, h.width / 2, 0, 6.283185307179586);
+      }
+    }
+    cairo_fill(cr);
+  } else {
+    hatch_lines(cr, x0, y0, x1, y1, h.angle, h.spacing);
+    if (h.kind == Hatch::Kind::crossed) hatch_lines(cr, x0, y0, x1, y1, h.angle + 90, h.spacing);
+    cairo_set_line_width(cr, h.width);
+    cairo_set_line_cap(cr, CAIRO_LINE_CAP_BUTT);
+    cairo_set_dash(cr, nullptr, 0, 0);
+    cairo_stroke(cr);
+  }
+  cairo_restore(cr);
+}
+
+void draw(cairo_t* cr, const PathItem& p) {
+  if (p.points.empty()) return;
+  if (p.hatch && p.closed && p.fill) {
+    trace(cr, p);
+    set_colour(cr, *p.fill);
+    cairo_fill(cr);
+    draw_hatch(cr, p, *p.hatch);
+    if (p.stroke) {
+      trace(cr, p);
+      apply_stroke(cr, *p.stroke);
+      cairo_stroke(cr);
+    }
+    return;
+  }
+  trace(cr, p);
   fill_and_stroke(cr, p.fill, p.stroke);
 }
 
@@ -96,7 +162,7 @@ void draw(cairo_t* cr, const TextItem& t) {
 
 }  // namespace
 
-void draw_page(cairo_t* cr, const DisplayPage& page) {
+void begin_drawing(cairo_t* cr) {
   cairo_save(cr);
   cairo_font_options_t* fo = cairo_font_options_create();
   // Positions come from HarfBuzz in unhinted font units; hinting would
@@ -105,8 +171,18 @@ void draw_page(cairo_t* cr, const DisplayPage& page) {
   cairo_font_options_set_hint_metrics(fo, CAIRO_HINT_METRICS_OFF);
   cairo_set_font_options(cr, fo);
   cairo_font_options_destroy(fo);
-  for (const auto& item : page.items) std::visit([cr](const auto& it) { draw(cr, it); }, item);
-  cairo_restore(cr);
+}
+
+void draw_item(cairo_t* cr, const DisplayItem& item) {
+  std::visit([cr](const auto& it) { draw(cr, it); }, item);
+}
+
+void end_drawing(cairo_t* cr) { cairo_restore(cr); }
+
+void draw_page(cairo_t* cr, const DisplayPage& page) {
+  begin_drawing(cr);
+  for (const auto& item : page.items) draw_item(cr, item);
+  end_drawing(cr);
 }
 
 }  // namespace forme

@@ -77,14 +77,28 @@ void set_boxes(QPDF& q, const std::vector<PageLinks>& pages) {
   }
 }
 
+// Depth-first through the structure tree, in the order of its /K arrays,
+// which is the reading order Cairo wrote.
+void set_figure_alts(QPDFObjectHandle node, const std::vector<std::string>& alts, std::size_t& next, int depth) {
+  if (depth > 64 || next >= alts.size()) return;
+  if (node.isArray()) {
+    for (int i = 0; i < node.getArrayNItems(); ++i) set_figure_alts(node.getArrayItem(i), alts, next, depth + 1);
+    return;
+  }
+  if (!node.isDictionary()) return;
+  QPDFObjectHandle s = node.getKey("/S");
+  if (s.isName() && s.getName() == "/Figure") node.replaceKey("/Alt", QPDFObjectHandle::newUnicodeString(alts[next++]));
+  set_figure_alts(node.getKey("/K"), alts, next, depth + 1);
+}
+
 }  // namespace
 
 std::string add_pdf_extras(const std::string& pdf, const std::vector<EmbeddedFile>& files,
-                           const std::vector<PageLinks>& pages) {
+                           const std::vector<PageLinks>& pages, const std::vector<std::string>& figure_alts) {
   bool any_link = false;
   bool any_box = false;
   for (const auto& p : pages) any_link = any_link || !p.links.empty(), any_box = any_box || p.trim_box || p.bleed_box;
-  if (files.empty() && !any_link && !any_box) return pdf;
+  if (files.empty() && !any_link && !any_box && figure_alts.empty()) return pdf;
   try {
     QPDF q;
     q.setSuppressWarnings(true);
@@ -92,6 +106,11 @@ std::string add_pdf_extras(const std::string& pdf, const std::vector<EmbeddedFil
     if (!files.empty()) embed(q, files);
     link(q, pages);
     set_boxes(q, pages);
+    if (!figure_alts.empty()) {
+      std::size_t next = 0;
+      QPDFObjectHandle root = q.getRoot().getKey("/StructTreeRoot");
+      if (root.isDictionary()) set_figure_alts(root.getKey("/K"), figure_alts, next, 0);
+    }
     QPDFWriter w(q);
     w.setOutputMemory();
     w.setDeterministicID(true);       // /ID from the content, not the time

@@ -32,10 +32,13 @@ struct PageLinks {
   std::optional<Rect> trim_box, bleed_box;  ///< written as /TrimBox and /BleedBox (ISO 32000-1 §14.11.2)
 };
 
-/// Returns `pdf` with `files` embedded and `pages[i]`'s links on page i.
-/// Returns it unchanged when there is nothing to add. Throws
-/// std::runtime_error if qpdf cannot read or write the file.
+/// Returns `pdf` with `files` embedded, `pages[i]`'s links on page i, and
+/// `figure_alts[k]` as the alternate text (/Alt, ISO 32000-1 §14.9.3) of
+/// the k-th /Figure structure element in document order (Cairo 1.16
+/// writes structure tags without attributes). Returns it unchanged when
+/// there is nothing to add. Throws std::runtime_error if qpdf cannot read
+/// or write the file.
 std::string add_pdf_extras(const std::string& pdf, const std::vector<EmbeddedFile>& files,
-                           const std::vector<PageLinks>& pages);
+                           const std::vector<PageLinks>& pages, const std::vector<std::string>& figure_alts = {});
 
 }  // namespace forme

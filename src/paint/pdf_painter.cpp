@@ -4,6 +4,7 @@
 #include <ctime>
 #include <stdexcept>
 #include <sstream>
+#include <string_view>
 
 #include "paint/cairo_stream.h"
 #include "paint/draw_cairo.h"
@@ -34,17 +35,21 @@ class PdfPainter final : public Painter {
       cairo_pdf_surface_set_metadata(surface_, CAIRO_PDF_METADATA_CREATOR, options_.info.creator.c_str());
       set_document_information();
       cr_ = cairo_create(surface_);
+      // One structure tree for the whole file (ISO 32000-1 §14.8): the
+      // chart and any table pages are one document.
+      cairo_tag_begin(cr_, "Document", "");
     } else {
       cairo_pdf_surface_set_size(surface_, page.width, page.height);
     }
     links_.push_back(PageLinks{page.height, page.links, page.trim_box, page.bleed_box});
-    draw_page(cr_, page);
+    draw_tagged(page);
     cairo_show_page(cr_);
     check_cairo(cairo_status(cr_), "PDF page");
   }
 
   void finish() override {
     if (!surface_) return;
+    cairo_tag_end(cr_, "Document");
     cairo_destroy(cr_);
     cr_ = nullptr;
     cairo_surface_finish(surface_);
@@ -56,12 +61,47 @@ class PdfPainter final : public Painter {
     const std::int64_t when = options_.info.creation_time.value_or(static_cast<std::int64_t>(std::time(nullptr)));
     std::string bytes = set_pdf_creation_date(std::move(buffer_).str(), pdf_date_utc(when));
     // Attachments and links go in last: the date rewrite reads Cairo's own layout.
-    bytes = add_pdf_extras(bytes, options_.info.attachments, links_);
+    bytes = add_pdf_extras(bytes, options_.info.attachments, links_, alts_);
     out_.write(bytes.data(), static_cast<std::streamsize>(bytes.size()));
     if (!out_) throw std::runtime_error("PDF file: write failed");
   }
 
  private:
+  // Every item is drawn inside exactly one structure element, never
+  // directly in Document: Cairo 1.16 mis-nests content that precedes a
+  // child tag. The page title is H1, a panel's items one Figure, other
+  // text P, and other shapes (the footer rule) a Div.
+  static const char* tag_for(const DisplayItem& item) {
+    if (const auto* t = std::get_if<TextItem>(&item)) return t->role == TextRole::title ? "H1" : "P";
+    return "Div";
+  }
+
+  void draw_tagged(const DisplayPage& page) {
+    begin_drawing(cr_);
+    std::size_t i = 0, f = 0;
+    while (i < page.items.size()) {
+      if (f < page.figures.size() && page.figures[f].first == i && page.figures[f].end > i) {
+        cairo_tag_begin(cr_, "Figure", "");
+        for (; i < page.figures[f].end; ++i) draw_item(cr_, page.items[i]);
+        cairo_tag_end(cr_, "Figure");
+        alts_.push_back(page.figures[f].alt);
+        ++f;
+        continue;
+      }
+      const std::size_t stop = f < page.figures.size() ? page.figures[f].first : page.items.size();
+      const char* tag = tag_for(page.items[i]);
+      cairo_tag_begin(cr_, tag, "");
+      // Neighbouring items of the same kind (the lines of one title or
+      // note) make one element.
+      do draw_item(cr_, page.items[i++]);
+      while (i < stop && std::string_view(tag_for(page.items[i])) == tag &&
+             !(std::get_if<TextItem>(&page.items[i]) && std::get_if<TextItem>(&page.items[i - 1]) &&
+               std::get<TextItem>(page.items[i]).role != std::get<TextItem>(page.items[i - 1]).role));
+      cairo_tag_end(cr_, tag);
+    }
+    end_drawing(cr_);
+  }
+
   void set_document_information() {
     const DocumentInfo& d = options_.info;
     if (!d.author.empty()) cairo_pdf_surface_set_metadata(surface_, CAIRO_PDF_METADATA_AUTHOR, d.author.c_str());
@@ -73,6 +113,7 @@ class PdfPainter final : public Painter {
 
   std::ostream& out_;
   std::vector<PageLinks> links_;  ///< each painted page's links, in page order
+  std::vector<std::string> alts_;  ///< each figure's alternate text, in document order
   std::ostringstream buffer_;  ///< Cairo's output, finished before it reaches out_
   PaintOptions options_;
   cairo_surface_t* surface_ = nullptr;

@@ -16,8 +16,9 @@ namespace {
 // Bars fill this share of their band; the rest is air between categories.
 constexpr double kBandFill = 0.72;
 
-PathItem box(double x0, double y0, double x1, double y1, Rgb fill) {
+PathItem box(double x0, double y0, double x1, double y1, Rgb fill, std::optional<Hatch> hatch = std::nullopt) {
   PathItem p;
+  p.hatch = hatch;
   p.points = {{x0, y0}, {x1, y0}, {x1, y1}, {x0, y1}};
   p.closed = true;
   p.fill = fill;
@@ -46,11 +47,11 @@ void draw_vertical_bar_marks(const MarkContext& ctx, DisplayPage& page) {
     for (std::size_t i = 0; i < series[k].x.size(); ++i) {
       double left = f.px(series[k].x[i]) - band / 2 + each * static_cast<double>(k);
       const double end = f.py(series[k].y[i]);
-      page.add(box(left, zero, left + each, end, colour));
+      page.add(box(left, zero, left + each, end, colour, hatch_for(ctx.pattern(series[k].name), colour, st.base)));
       page.data_marks.push_back({left, std::min(zero, end), each, std::abs(end - zero)});
       if (ctx.data.spec->value_labels)
         add_value_label({{left, std::min(zero, end), each, std::abs(end - zero)}, series[k].y[i], colour, false,
-                         series[k].y[i] >= 0 ? 1 : -1},
+                         series[k].y[i] >= 0 ? 1 : -1, ctx.pattern(series[k].name) != FillPattern::plain},
                         f.y.format, st, page);
     }
   }
@@ -64,7 +65,7 @@ void draw_vertical_bar_marks(const MarkContext& ctx, DisplayPage& page) {
     const double w = t.width;
     const Rgb colour = ctx.colours.at(s.name);
     const double sq = st.label_size() * 0.7;
-    page.add(box(x, cy - sq / 2, x + sq, cy + sq / 2, colour));
+    page.add(box(x, cy - sq / 2, x + sq, cy + sq / 2, colour, hatch_for(ctx.pattern(s.name), colour, st.base)));
     page.add(text_mid(std::move(t), x + sq * 1.4, cy, Align::left, text_ink(colour, st.ink.paper), TextRole::series_label));
     x += sq * 1.4 + w + st.base * 1.2;
   }
@@ -84,12 +85,12 @@ void draw_horizontal_bar_marks(const MarkContext& ctx, DisplayPage& page) {
     for (std::size_t i = 0; i < series[k].y.size(); ++i) {
       double top = f.py(series[k].y[i]) - band / 2 + each * static_cast<double>(k);
       const double end = f.px(series[k].x[i]);
-      page.add(box(zero, top, end, top + each, colour));
+      page.add(box(zero, top, end, top + each, colour, hatch_for(ctx.pattern(series[k].name), colour, st.base)));
       page.data_marks.push_back({std::min(zero, end), top, std::abs(end - zero), each});
       ValuePlacement placed_value = ValuePlacement::inside;
       if (ctx.data.spec->value_labels)
         placed_value = add_value_label({{std::min(zero, end), top, std::abs(end - zero), each}, series[k].x[i], colour,
-                                        true, series[k].x[i] >= 0 ? 1 : -1},
+                                        true, series[k].x[i] >= 0 ? 1 : -1, ctx.pattern(series[k].name) != FillPattern::plain},
                                        f.x.format, st, page);
       if (series[k].y[i] == 0) {
         name_x[k] = std::max(zero, f.px(series[k].x[i]));

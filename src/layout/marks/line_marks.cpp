@@ -36,7 +36,7 @@ void draw_line_marks(const MarkContext& ctx, DisplayPage& page) {
   for (const auto& s : ctx.data.series) {
     const Rgb colour = ctx.colours.at(s.name);
     PathItem path;
-    path.stroke = Stroke{colour, st.line_width(), {}, true};
+    path.stroke = Stroke{colour, st.line_width(), dash_lengths(ctx.dash(s.name), st.line_width()), true};
     for (std::size_t i = 0; i < s.x.size(); ++i) path.points.push_back({f.px(s.x[i]), f.py(s.y[i])});
     // Thin long series to what print can show: no drawn point moves by
     // more than 0.05 pt, far below what an eye resolves on paper.

@@ -7,6 +7,7 @@
 #include "base/diagnostic.h"
 #include "layout/page_style.h"
 #include "layout/plot_frame.h"
+#include "layout/series_looks.h"
 #include "paint/display_list.h"
 #include "series/panel_data.h"
 
@@ -22,6 +23,14 @@ struct MarkContext {
   const SeriesColours& colours;
   bool label_series = false;  ///< name series directly (line ends, …)
   DiagnosticSink* warnings = nullptr;  ///< where marks report what they had to leave out
+  const PanelLooks* looks = nullptr;  ///< dashes and patterns; none: solid, plain
+
+  DashStyle dash(const std::string& series) const {
+    return looks && looks->series.count(series) ? looks->series.at(series).dash : DashStyle::solid;
+  }
+  FillPattern pattern(const std::string& series) const {
+    return looks && looks->series.count(series) ? looks->series.at(series).pattern : FillPattern::plain;
+  }
 };
 
 /// Space a chart kind needs beside the plot for its own labels (line-end

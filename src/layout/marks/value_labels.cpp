@@ -17,7 +17,7 @@ ValuePlacement add_value_label(const BarValue& b, const NumberFormat& format, co
   const double lh = PageStyle::line_height(st.fonts.regular, st.label_size());
   const Rgb inside_ink = ink_on(b.fill, st);
   // Inside only where the text fits with padding and still reads at 4.5:1.
-  const bool reads = meets(contrast_ratio(inside_ink, b.fill), 4.5);
+  const bool reads = !b.patterned && meets(contrast_ratio(inside_ink, b.fill), 4.5);
   if (b.horizontal) {
     const bool fits = reads && t.width + 2 * pad <= b.bar.w && lh <= b.bar.h;
     const double cy = b.bar.cy();

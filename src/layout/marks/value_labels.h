@@ -1,6 +1,6 @@
 #pragma once
 /// Values written on bars. Inside the bar's end when the measured text fits
-/// with padding, in whichever of the page's inks reads best on the fill
+/// with padding and the bar has no fill pattern, in whichever of the page's inks reads best on the fill
 /// (WCAG 2.x contrast ≥ 4.5:1); otherwise just beyond the bar's end, in
 /// text ink on paper. Numbers use the value axis's format.
 #include "layout/marks/marks.h"
@@ -15,6 +15,7 @@ struct BarValue {
   Rgb fill;
   bool horizontal = false;
   int grows = 1;
+  bool patterned = false;  ///< a fill pattern runs through the bar: text inside would not read
 };
 
 /// Where the label went, for tests: inside the bar or beyond it.
