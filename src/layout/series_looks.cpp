@@ -63,7 +63,8 @@ const char* const kGroupHint =
     "group the series into fewer classes, show them as small multiples, or name each line directly and use one colour";
 
 // Colours for `names` (page order) from one palette.
-std::map<std::string, Rgb> colour_group(std::vector<std::string> names, const Effective& e, const SourceLoc& where) {
+std::map<std::string, Rgb> colour_group(std::vector<std::string> names, const Effective& e, const SourceLoc& where,
+                                        const Rgb& paper) {
   const Palette& p = *e.palette;
   std::map<std::string, Rgb> out;
   if (p.kind == PaletteKind::categorical) {
@@ -75,10 +76,11 @@ std::map<std::string, Rgb> colour_group(std::vector<std::string> names, const Ef
   }
   if (p.kind == PaletteKind::sequential) {
     Palette usable = p;
-    usable.colours.erase(usable.colours.begin(), usable.colours.begin() + sequential_skip);
+    usable.colours = series_stops(p, paper);
     const int most = static_cast<int>(usable.colours.size());
     if (static_cast<int>(names.size()) > most)
-      throw InputError(where, too_many(names.size(), p, most, "for series on white paper"), kGroupHint);
+      throw InputError(where, too_many(names.size(), p, most, "as series that stand out from the paper"),
+                       kGroupHint);
     order_for_grading(names);
     if (names.size() == 1) return {{names[0], usable.colours.back()}};
     const std::vector<Rgb> classes = sample_sequential(usable, static_cast<int>(names.size()));
@@ -125,7 +127,15 @@ constexpr FillPattern kPatternOrder[] = {FillPattern::plain, FillPattern::hatch,
 
 }  // namespace
 
+std::vector<Rgb> series_stops(const Palette& p, const Rgb& paper) {
+  std::vector<Rgb> out;
+  for (const Rgb& c : p.colours)
+    if (meets(contrast_ratio(c, paper), wcag::graphics)) out.push_back(c);
+  return out;
+}
+
 std::vector<PanelLooks> assign_looks(const PageSpec& spec, const std::vector<PanelData>& panels) {
+  const Rgb paper = spec.sheet.press.background.value_or(Rgb{1, 1, 1});
   // Panels that use the same palette share one order of series names.
   std::vector<Effective> eff;
   std::map<const Palette*, std::vector<std::string>> names;
@@ -147,7 +157,7 @@ std::vector<PanelLooks> assign_looks(const PageSpec& spec, const std::vector<Pan
   for (std::size_t i = 0; i < panels.size(); ++i) {
     const Effective& e = eff[i];
     const PanelSpec& ps = *panels[i].spec;
-    if (!coloured.count(e.palette)) coloured[e.palette] = colour_group(names[e.palette], e, blame(e, ps));
+    if (!coloured.count(e.palette)) coloured[e.palette] = colour_group(names[e.palette], e, blame(e, ps), paper);
     const auto& colours = coloured[e.palette];
     PanelLooks looks;
     looks.loc = ps.loc;

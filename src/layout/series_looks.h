@@ -6,7 +6,7 @@
 /// appearance on the page, so a series keeps its colour in every panel.
 /// Graded palettes (sequential) give ordered series — numeric names in
 /// numeric order, others as they appear — evenly spaced classes from their
-/// darker stops; a diverging palette needs series named by numbers and
+/// stops that stand out from the paper; a diverging palette needs series named by numbers and
 /// draws the midpoint (default 0) in its neutral middle, values below on
 /// one arm and above on the other, on one step size for both arms.
 /// A series given its own colour takes none of the palette's, which go to
@@ -17,6 +17,7 @@
 #include <vector>
 
 #include "base/diagnostic.h"
+#include "colour/palette.h"
 #include "colour/rgb.h"
 #include "describe/page_spec.h"
 #include "paint/display_list.h"
@@ -38,9 +39,10 @@ struct PanelLooks {
   std::string palette;  ///< the palette the panel uses
 };
 
-/// Classes a sequential palette's usable stops keep apart: the two
-/// palest stops are for areas behind data, too faint for series on white.
-inline constexpr int sequential_skip = 2;
+/// The stops of a sequential palette that series may wear: those that
+/// reach 3:1 against `paper` (WCAG 2.x SC 1.4.11, graphics). Paler stops
+/// are for areas behind data.
+std::vector<Rgb> series_stops(const Palette& p, const Rgb& paper);
 
 /// Looks for every panel, in panel order. Throws InputError, located at the
 /// palette (or the series column), when a panel asks for more classes than

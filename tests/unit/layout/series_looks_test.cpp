@@ -3,10 +3,12 @@
 // against copied colour codes.
 #include <catch2/catch.hpp>
 
+#include <algorithm>
 #include <cmath>
 #include <cstdio>
 #include <set>
 
+#include "colour/contrast.h"
 #include "colour/convert.h"
 #include "colour/palette.h"
 #include "layout/series_looks.h"
@@ -42,7 +44,7 @@ TEST_CASE("series keep one estuary colour across panels, in order of first appea
   CHECK(looks[1].palette == "estuary");
 }
 
-TEST_CASE("a sequential palette darkens with the series' numeric order, skipping its palest stops", "[looks]") {
+TEST_CASE("a sequential palette darkens with the series' numeric order, from stops that reach 3:1 on white", "[looks]") {
   PageSpec page;
   page.colours.palette = at("fjord", 3, 12);
   PanelSpec spec;
@@ -54,8 +56,16 @@ TEST_CASE("a sequential palette darkens with the series' numeric order, skipping
   CHECK(lightness(s.at("2022").colour) > lightness(s.at("2023").colour));
   CHECK(lightness(s.at("2023").colour) > lightness(s.at("2024").colour));
   const auto& fjord = find_palette("fjord")->colours;
-  CHECK(s.at("2021").colour == fjord[sequential_skip]);
+  const auto usable = series_stops(*find_palette("fjord"), Rgb{1, 1, 1});
+  REQUIRE(usable.size() >= 4);
+  CHECK(s.at("2021").colour == usable.front());
   CHECK(s.at("2024").colour == fjord.back());
+  // Every class stands out from white at 3:1 (WCAG 2.x SC 1.4.11).
+  for (const auto& [name, look] : s) CHECK(meets(contrast_ratio(look.colour, Rgb{1, 1, 1}), wcag::graphics));
+  // The stop just paler than the first usable one does not.
+  const auto first = std::find(fjord.begin(), fjord.end(), usable.front());
+  REQUIRE(first != fjord.begin());
+  CHECK_FALSE(meets(contrast_ratio(*(first - 1), Rgb{1, 1, 1}), wcag::graphics));
 }
 
 TEST_CASE("a diverging palette puts the stated midpoint in its neutral middle, arms of equal lightness", "[looks]") {
@@ -111,8 +121,15 @@ TEST_CASE("more series than a named palette keeps distinct is an error at the pa
     CHECK(e.diagnostic().hint.find("name each line directly") != std::string::npos);
   }
   page.colours.palette = at("heath", 4, 12);
-  std::vector<PanelData> eight{panel_of(spec, {"1", "2", "3", "4", "5", "6", "7", "8"})};
-  CHECK_THROWS_AS(assign_looks(page, eight), InputError);
+  const std::size_t most = series_stops(*find_palette("heath"), Rgb{1, 1, 1}).size();
+  std::vector<std::string> many;
+  for (std::size_t i = 0; i <= most; ++i) many.push_back(std::to_string(i));
+  std::vector<PanelData> over{panel_of(spec, many)};
+  CHECK_THROWS_WITH(assign_looks(page, over), Catch::Contains("keeps distinct as series that stand out from the paper (at most " +
+                                                              std::to_string(most) + ")"));
+  many.pop_back();
+  std::vector<PanelData> enough{panel_of(spec, many)};
+  CHECK_NOTHROW(assign_looks(page, enough));
   page.colours.palette = at("foreshore", 4, 12);
   std::vector<PanelData> arm{panel_of(spec, {"1", "2", "3", "4", "5"})};
   CHECK_THROWS_WITH(assign_looks(page, arm), Catch::Contains("at most 4 on each side"));
