@@ -137,9 +137,6 @@ struct PanelSpec {
   Located label_points_by;    ///< dot panels: column whose text names each point
   Located label_priority;     ///< number column: higher values are labelled first
   std::vector<CalloutSpec> callouts;
-  SourceLoc loc;
-};
-
   ColourSpec colours;         ///< this panel's palette and series looks
   SourceLoc aspect_loc;
   SourceLoc loc;  ///< the panel mapping (or grid) this came from
