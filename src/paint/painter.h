@@ -23,6 +23,24 @@ struct EmbeddedFile {
   std::string bytes;
 };
 
+/// A bookmark in a PDF's outline (ISO 32000-1 §12.3.3) that opens a page.
+struct OutlineEntry {
+  std::string title;
+  std::size_t page = 0;  ///< 0-based page index
+  int parent = -1;       ///< index of the parent entry in the outline list; -1 at the top
+};
+
+/// How a range of page labels counts (ISO 32000-1 §12.4.2, Table 159).
+enum class PageNumberStyle { decimal, lower_roman };
+
+/// Page labels from `first_page` on (until the next range): what a reader
+/// shows as the page's number.
+struct PageLabelRange {
+  std::size_t first_page = 0;  ///< 0-based page index
+  PageNumberStyle style = PageNumberStyle::decimal;
+  int start = 1;  ///< number of the range's first page
+};
+
 struct DocumentInfo {
   std::string title;
   std::string creator = "forme";
@@ -36,6 +54,10 @@ struct DocumentInfo {
   /// nullopt dates it at the time of painting. Fixing it (the driver takes
   /// SOURCE_DATE_EPOCH) makes repeated PDF output byte-identical.
   std::optional<std::int64_t> creation_time;
+  /// PDF only: bookmarks, parents before children.
+  std::vector<OutlineEntry> outline;
+  /// PDF only: page label ranges in page order; empty writes none.
+  std::vector<PageLabelRange> page_labels;
 };
 
 class Painter {

@@ -91,14 +91,31 @@ void set_figure_alts(QPDFObjectHandle node, const std::vector<std::string>& alts
   set_figure_alts(node.getKey("/K"), alts, next, depth + 1);
 }
 
+// A flat number tree (ISO 32000-1 §7.9.7) of page label dictionaries
+// (§12.4.2): /S /D decimal or /S /r lower-case roman, /St the first number.
+void label(QPDF& q, const std::vector<PageLabelRange>& labels) {
+  auto nums = QPDFObjectHandle::newArray();
+  for (const auto& r : labels) {
+    auto d = QPDFObjectHandle::newDictionary();
+    d.replaceKey("/S", QPDFObjectHandle::newName(r.style == PageNumberStyle::lower_roman ? "/r" : "/D"));
+    if (r.start != 1) d.replaceKey("/St", QPDFObjectHandle::newInteger(r.start));
+    nums.appendItem(QPDFObjectHandle::newInteger(static_cast<long long>(r.first_page)));
+    nums.appendItem(d);
+  }
+  auto tree = QPDFObjectHandle::newDictionary();
+  tree.replaceKey("/Nums", nums);
+  q.getRoot().replaceKey("/PageLabels", q.makeIndirectObject(tree));
+}
+
 }  // namespace
 
 std::string add_pdf_extras(const std::string& pdf, const std::vector<EmbeddedFile>& files,
-                           const std::vector<PageLinks>& pages, const std::vector<std::string>& figure_alts) {
+                           const std::vector<PageLinks>& pages, const std::vector<std::string>& figure_alts,
+                           const std::vector<PageLabelRange>& labels) {
   bool any_link = false;
   bool any_box = false;
   for (const auto& p : pages) any_link = any_link || !p.links.empty(), any_box = any_box || p.trim_box || p.bleed_box;
-  if (files.empty() && !any_link && !any_box && figure_alts.empty()) return pdf;
+  if (files.empty() && !any_link && !any_box && figure_alts.empty() && labels.empty()) return pdf;
   try {
     QPDF q;
     q.setSuppressWarnings(true);
@@ -111,6 +128,7 @@ std::string add_pdf_extras(const std::string& pdf, const std::vector<EmbeddedFil
       QPDFObjectHandle root = q.getRoot().getKey("/StructTreeRoot");
       if (root.isDictionary()) set_figure_alts(root.getKey("/K"), figure_alts, next, 0);
     }
+    if (!labels.empty()) label(q, labels);
     QPDFWriter w(q);
     w.setOutputMemory();
     w.setDeterministicID(true);       // /ID from the content, not the time

@@ -13,6 +13,7 @@
 ///    /BleedBox rectangles (§14.11.2) in the page dictionary;
 ///  - each link becomes a /Link annotation (§12.5.6.5) with a URI action
 ///    (§12.6.4.7) and no border, in the page's /Annots array.
+///  - page labels become the catalog's /PageLabels number tree (§12.4.2).
 /// The file is rewritten whole, with no dates and a document /ID computed
 /// from its content, so the same page still gives the same bytes.
 #include <optional>
@@ -39,6 +40,7 @@ struct PageLinks {
 /// there is nothing to add. Throws std::runtime_error if qpdf cannot read
 /// or write the file.
 std::string add_pdf_extras(const std::string& pdf, const std::vector<EmbeddedFile>& files,
-                           const std::vector<PageLinks>& pages, const std::vector<std::string>& figure_alts = {});
+                           const std::vector<PageLinks>& pages, const std::vector<std::string>& figure_alts = {},
+                           const std::vector<PageLabelRange>& labels = {});
 
 }  // namespace forme

@@ -52,6 +52,7 @@ class PdfPainter final : public Painter {
     cairo_tag_end(cr_, "Document");
     cairo_destroy(cr_);
     cr_ = nullptr;
+    add_outline();
     cairo_surface_finish(surface_);
     check_cairo(cairo_surface_status(surface_), "PDF file");
     cairo_surface_destroy(surface_);
@@ -61,7 +62,7 @@ class PdfPainter final : public Painter {
     const std::int64_t when = options_.info.creation_time.value_or(static_cast<std::int64_t>(std::time(nullptr)));
     std::string bytes = set_pdf_creation_date(std::move(buffer_).str(), pdf_date_utc(when));
     // Attachments and links go in last: the date rewrite reads Cairo's own layout.
-    bytes = add_pdf_extras(bytes, options_.info.attachments, links_, alts_);
+    bytes = add_pdf_extras(bytes, options_.info.attachments, links_, alts_, options_.info.page_labels);
     out_.write(bytes.data(), static_cast<std::streamsize>(bytes.size()));
     if (!out_) throw std::runtime_error("PDF file: write failed");
   }
@@ -100,6 +101,19 @@ class PdfPainter final : public Painter {
       cairo_tag_end(cr_, tag);
     }
     end_drawing(cr_);
+  }
+
+  // Cairo resolves "page=N" destinations when the file is finished.
+  void add_outline() {
+    std::vector<int> ids;
+    for (const auto& e : options_.info.outline) {
+      const int parent = e.parent >= 0 && static_cast<std::size_t>(e.parent) < ids.size()
+                             ? ids[static_cast<std::size_t>(e.parent)]
+                             : CAIRO_PDF_OUTLINE_ROOT;
+      const std::string dest = "page=" + std::to_string(e.page + 1);
+      ids.push_back(cairo_pdf_surface_add_outline(surface_, parent, e.title.c_str(), dest.c_str(),
+                                                  static_cast<cairo_pdf_outline_flags_t>(0)));
+    }
   }
 
   void set_document_information() {
