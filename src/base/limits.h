@@ -35,6 +35,10 @@ struct Limits {
   /// Most panels listed under `panels`.
   std::size_t panels = 400;
 
+  // --- reports (enforced by report/report_plan) --------------------------
+  /// Most pages one report description may make (repeated pages included).
+  std::size_t report_pages = 10'000;
+
   // --- data (enforced by data/csv_reader through CsvOptions::max_bytes) ---
   /// Largest CSV table file accepted, in bytes.
   std::size_t table_bytes = 256u * 1024 * 1024;

@@ -5,9 +5,11 @@
 
 #include <filesystem>
 #include <iostream>
+#include <optional>
 
 #include "base/diagnostic.h"
 #include "cli/colour_commands.h"
+#include "cli/progress_bar.h"
 #include "cli/render_job.h"
 #include "cli/signal_cleanup.h"
 #include "cli/starters.h"
@@ -41,7 +43,7 @@ bool has_warnings(const std::vector<forme::Diagnostic>& ds) {
   return false;
 }
 
-int render(forme::RenderOptions& options, const char* argv0) {
+int render(forme::RenderOptions& options, bool quiet, const char* argv0) {
   // A wrong output name is a mistake on the command line, not in the page.
   if (!forme::format_for_path(options.output_path)) {
     std::cerr << options.output_path << ": error: unknown output type\n  hint: name the output .pdf, .svg or .png\n";
@@ -55,7 +57,16 @@ int render(forme::RenderOptions& options, const char* argv0) {
   }
   forme::install_signal_cleanup();
   options.font_dir = forme::find_font_dir(argv0);
+  // A report of many pages shows its progress on a terminal, unless asked not to.
+  std::optional<forme::ProgressBar> bar;
+  if (!quiet && forme::stderr_is_terminal()) {
+    options.progress = [&bar](std::size_t done, std::size_t total) {
+      if (!bar) bar.emplace(stderr);
+      bar->update(done, total);
+    };
+  }
   forme::RenderResult r = forme::render_file(options);
+  bar.reset();
   print_diagnostics(r.diagnostics);
   return r.ok ? 0 : kExitInput;
 }
@@ -103,6 +114,8 @@ int main(int argc, char** argv) {
   render_cmd->add_option("--dpi", render_options.dpi, "resolution of PNG output")->check(CLI::Range(10.0, 2400.0));
   render_cmd->add_flag("--greyscale", render_options.greyscale,
                        "paint in greys of the same lightness, for black-and-white printing");
+  bool quiet = false;
+  render_cmd->add_flag("-q,--quiet", quiet, "no progress bar while a report renders");
 
   std::string check_page;
   bool strict = false;
@@ -177,7 +190,7 @@ int main(int argc, char** argv) {
   forme::Limits limits;
   for (const auto& setting : limit_settings) forme::set_limit(limits, setting);  // checked while parsing
   render_options.limits = limits;
-  if (*render_cmd) return render(render_options, argv[0]);
+  if (*render_cmd) return render(render_options, quiet, argv[0]);
   if (*check_cmd) return check(check_page, strict, check_greyscale, limits, argv[0]);
   if (*contrast_cmd) return forme::run_contrast(fg, bg, std::cout, std::cerr);
   if (*palette_cmd) {

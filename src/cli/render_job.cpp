@@ -3,6 +3,7 @@
 #include <time.h>
 
 #include <cerrno>
+#include <chrono>
 
 #include <cstdlib>
 #include <ctime>
@@ -14,6 +15,7 @@
 #include "audit/colour_audit.h"
 #include "audit/page_audit.h"
 #include "axes/axis.h"
+#include "cli/report_job.h"
 #include "cli/signal_cleanup.h"
 #include "colour/palette.h"
 #include "data/csv_reader.h"
@@ -26,17 +28,16 @@
 #include "paint/greyscale.h"
 #include "paint/pdf_dates.h"
 #include "layout/data_table_page.h"
+#include "report/read_report.h"
 #include "series/plotted_rows.h"
 #include "series/select_series.h"
 #include "summary/describe_chart.h"
 
 namespace forme {
 
-namespace {
-
-PageStyle style_for(const PageSpec& spec, const std::string& font_dir) {
+PageStyle style_for_page(const PageSpec& spec, const FontSet& fonts) {
   PageStyle st;
-  st.fonts = open_bundled_fonts(font_dir);
+  st.fonts = fonts;
   const TypeSpec& t = spec.type;
   if (spec.type_size > 0) st.base = spec.type_size;
   else if (t.reading_distance_cm > 0) st.base = base_size_for_distance(t.reading_distance_cm);
@@ -49,26 +50,31 @@ PageStyle style_for(const PageSpec& spec, const std::string& font_dir) {
   return st;
 }
 
+Table load_table(const TableSource& src, const Limits& limits) {
+  CsvOptions o;
+  o.declared = src.declared;
+  o.max_bytes = limits.table_bytes;
+  try {
+    Table t = read_csv(src.path, src.display_path, o);
+    t.name = src.name;
+    return t;
+  } catch (const InputError& e) {
+    // A file that cannot be opened is best reported where the page names it.
+    if (e.diagnostic().loc.line == 0) {
+      Diagnostic d = e.diagnostic();
+      d.message = "table '" + src.name + "' (" + src.display_path + "): " + d.message;
+      d.loc = src.loc;
+      throw InputError(d);
+    }
+    throw;
+  }
+}
+
+namespace {
+
 std::vector<Table> load_tables(const PageSpec& spec, const Limits& limits) {
   std::vector<Table> tables;
-  for (const auto& src : spec.tables) {
-    CsvOptions o;
-    o.declared = src.declared;
-    o.max_bytes = limits.table_bytes;
-    try {
-      tables.push_back(read_csv(src.path, src.display_path, o));
-    } catch (const InputError& e) {
-      // A file that cannot be opened is best reported where the page names it.
-      if (e.diagnostic().loc.line == 0) {
-        Diagnostic d = e.diagnostic();
-        d.message = "table '" + src.name + "' (" + src.display_path + "): " + d.message;
-        d.loc = src.loc;
-        throw InputError(d);
-      }
-      throw;
-    }
-    tables.back().name = src.name;
-  }
+  for (const auto& src : spec.tables) tables.push_back(load_table(src, limits));
   return tables;
 }
 
@@ -113,44 +119,59 @@ ComposedDocument compose_document(const std::string& page_path, const std::strin
     throw InputError(errors.front());
   }
   std::vector<Table> tables = load_tables(*spec, limits);                   // 2. load data
-  std::vector<PanelData> panels = select_series(*spec, tables, sink, limits);
-  std::vector<PanelAxes> axes = resolve_axes(panels, spec->grid, sink); // 3. resolve scales
-  audit_page(*spec, panels, axes, sink);
-  PageStyle style = style_for(*spec, font_dir);                     // 4. measure text (fonts)
+  return compose_spec(std::move(*spec), tables, open_bundled_fonts(font_dir), sink, limits, nullptr, greyscale);
+}
+
+ComposedDocument compose_spec(PageSpec spec, const std::vector<Table>& tables, const FontSet& fonts,
+                              DiagnosticSink& sink, const Limits& limits, StageTimes* times, bool greyscale) {
+  auto t0 = std::chrono::steady_clock::now();
+  // Adds the time since the last call to `stage` (when timing is asked for).
+  auto lap = [&](double StageTimes::*stage) {
+    if (!times) return;
+    const auto now = std::chrono::steady_clock::now();
+    times->*stage += std::chrono::duration<double>(now - t0).count();
+    t0 = now;
+  };
+  std::vector<PanelData> panels = select_series(spec, tables, sink, limits);
+  std::vector<PanelAxes> axes = resolve_axes(panels, spec.grid, sink); // 3. resolve scales
+  audit_page(spec, panels, axes, sink);
+  lap(&StageTimes::scales);
+  PageStyle style = style_for_page(spec, fonts);                    // 4. measure text (fonts)
   // Default margins grow with type set larger than 8 pt (posters), so the
   // page keeps its proportions; margins the page states stay as stated.
-  if (!spec->sheet.margins_stated && style.base > 8) {
-    Margins& m = spec->sheet.margins;
+  if (!spec.sheet.margins_stated && style.base > 8) {
+    Margins& m = spec.sheet.margins;
     const double k = style.base / 8;
     m = {m.top * k, m.right * k, m.bottom * k, m.left * k};
   }
-  if (spec->sheet.height_from_content) spec->sheet.height = content_height(*spec, panels, axes, style);
+  if (spec.sheet.height_from_content) spec.sheet.height = content_height(spec, panels, axes, style);
   ComposedDocument doc;
-  doc.pages.push_back(layout_page(*spec, panels, axes, style, sink)); // 5-6. lay out, place labels
-  audit_layout(*spec, doc.pages.front(), sink, limits);
-  audit_missing_glyphs(*spec, doc.pages.front(), sink);
-  greyscale = greyscale || spec->greyscale;  // for black-and-white printing
+  doc.pages.push_back(layout_page(spec, panels, axes, style, sink)); // 5-6. lay out, place labels
+  audit_layout(spec, doc.pages.front(), sink, limits);
+  audit_missing_glyphs(spec, doc.pages.front(), sink);
+  greyscale = greyscale || spec.greyscale;  // for black-and-white printing
   if (greyscale) doc.pages.front() = in_greyscale(std::move(doc.pages.front()));
-  audit_colours(*spec, panels, doc.pages.front(), greyscale, sink);
+  audit_colours(spec, panels, doc.pages.front(), greyscale, sink);
+  lap(&StageTimes::layout);
   for (const auto& d : sink.items())
     if (d.severity == Severity::error) throw InputError(d);  // reported already; stops the write
   // What travels with the chart: the rows plotted, the page in words.
-  const std::vector<PlottedRows> plotted = plotted_rows(*spec, panels, tables);
-  if (spec->data.table_page)
-    for (auto& p : data_table_pages(*spec, plotted, style)) doc.pages.push_back(std::move(p));
+  const std::vector<PlottedRows> plotted = plotted_rows(spec, panels, tables);
+  if (spec.data.table_page)
+    for (auto& p : data_table_pages(spec, plotted, style)) doc.pages.push_back(std::move(p));
   if (doc.pages.size() > limits.pages)
-    throw InputError(spec->loc,
+    throw InputError(spec.loc,
                      "the document would have " + std::to_string(doc.pages.size()) + " pages, more than the " +
                          std::to_string(limits.pages) + " one document may hold",
                      "filter the rows set in the table pages, or raise the limit with '--limit pages=N'");
-  doc.info = document_info(*spec, plotted);
-  doc.info.description = describe_chart(*spec, panels, axes);
+  doc.info = document_info(spec, plotted);
+  doc.info.description = describe_chart(spec, panels, axes);
   // Each panel in words, for the tagged PDF's figure alternate text.
   auto& figures = doc.pages.front().figures;
   for (std::size_t i = 0; i < figures.size() && i < panels.size(); ++i)
-    figures[i].alt = describe_chart(*spec, {panels[i]}, {axes[i]});
+    figures[i].alt = describe_chart(spec, {panels[i]}, {axes[i]});
   // Last, the press sheet around each trimmed page: bleed, marks, slug.
-  const PressSpec& press = spec->sheet.press;
+  const PressSpec& press = spec.sheet.press;
   const long long today = parse_source_date_epoch(std::getenv("SOURCE_DATE_EPOCH")).value_or(std::time(nullptr));
   for (std::size_t i = 0; i < doc.pages.size(); ++i) {
     const std::string slug = press.slug.empty() ? std::string() : slug_line(press.slug, today, i + 1, doc.pages.size());
@@ -158,6 +179,7 @@ ComposedDocument compose_document(const std::string& page_path, const std::strin
     // The press sheet's paper colour and marks print in grey too.
     if (greyscale) doc.pages[i] = in_greyscale(std::move(doc.pages[i]));
   }
+  lap(&StageTimes::layout);
   return doc;
 }
 
@@ -222,7 +244,20 @@ RenderResult render_file(const RenderOptions& o) {
     std::error_code ec;
     if (std::filesystem::equivalent(o.output_path, o.page_path, ec))
       throw InputError(SourceLoc{o.output_path}, "output would overwrite the page description");
-    std::string bytes = render_to_bytes(o.page_path, *format, o.font_dir, o.dpi, sink, o.limits, o.greyscale);
+    std::string bytes;
+    if (is_report_description(o.page_path)) {
+      if (*format != OutputFormat::pdf)
+        throw InputError(SourceLoc{o.output_path}, "a report is written as one PDF of many pages",
+                         "name the output .pdf");
+      ReportRunOptions ro;
+      ro.font_dir = o.font_dir;
+      ro.limits = o.limits;
+      ro.progress = o.progress;
+      ro.creation_time = parse_source_date_epoch(std::getenv("SOURCE_DATE_EPOCH"));
+      bytes = render_report_to_bytes(o.page_path, sink, ro);
+    } else {
+      bytes = render_to_bytes(o.page_path, *format, o.font_dir, o.dpi, sink, o.limits, o.greyscale);
+    }
     CleanupPathScope forget_temp;
     std::optional<AtomicFile> file;
     {

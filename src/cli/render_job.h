@@ -1,12 +1,16 @@
 #pragma once
 /// The driver: runs the stages of one render in order. Reading this file
 /// top to bottom is reading how a page is made.
+#include <functional>
 #include <optional>
 #include <string>
 #include <vector>
 
 #include "base/diagnostic.h"
 #include "base/limits.h"
+#include "data/table.h"
+#include "describe/page_spec.h"
+#include "layout/page_style.h"
 #include "paint/display_list.h"
 #include "paint/painter.h"
 
@@ -19,6 +23,8 @@ struct RenderOptions {
   std::string font_dir;  ///< bundled fonts folder
   Limits limits;         ///< what one run accepts (base/limits.h)
   bool greyscale = false;  ///< paint in grey for black-and-white printing (as the page's colours.greyscale)
+  /// Reports: called after each page is painted (pages done, pages in all).
+  std::function<void(std::size_t, std::size_t)> progress;
 };
 
 struct RenderResult {
@@ -26,7 +32,8 @@ struct RenderResult {
   bool ok = false;
 };
 
-/// Renders a page description to a file; never throws for bad input.
+/// Renders a page description, or a report description (cli/report_job.h),
+/// to a file; never throws for bad input.
 /// While the temporary output file exists its path is registered with
 /// cli/signal_cleanup.h, so an interrupted run leaves nothing behind.
 ///
@@ -52,6 +59,26 @@ struct ComposedDocument {
 /// colours.greyscale) paints every page in grey. Throws InputError.
 ComposedDocument compose_document(const std::string& page_path, const std::string& font_dir,
                                   DiagnosticSink& warnings, const Limits& limits = {}, bool greyscale = false);
+
+/// Stage 2 for one table the page names: reads its CSV, reporting a file
+/// that cannot be opened where the page names it. Throws InputError.
+Table load_table(const TableSource& source, const Limits& limits);
+
+/// The sizes and inks a page is set in, with already opened fonts.
+PageStyle style_for_page(const PageSpec& spec, const FontSet& fonts);
+
+/// Wall time spent in each stage, in seconds, summed over the pages of a
+/// run (benchmarks read it). `layout` includes label placement, which runs
+/// inside layout.
+struct StageTimes {
+  double read = 0, data = 0, scales = 0, layout = 0, paint = 0;
+};
+
+/// Stages 2b-6 for a page already read, with its tables loaded (in the
+/// order of spec.tables). Throws InputError.
+ComposedDocument compose_spec(PageSpec spec, const std::vector<Table>& tables, const FontSet& fonts,
+                              DiagnosticSink& warnings, const Limits& limits = {}, StageTimes* times = nullptr,
+                              bool greyscale = false);
 
 /// Runs every stage up to painting: the laid-out chart page (tests read its text
 /// positions). Throws InputError.

@@ -280,6 +280,44 @@ struct Schema {
        {"type", &type, false, "type sizes: by job, by reading distance, or each stated"},
        {"marks", &marks, false, "line widths, tick length and dot size (default: in proportion to the type)"},
        {"colours", &page_colours, false, "palette, series colours, dashes and patterns, greyscale printing"}});
+
+  // A report: many pages in one PDF, in sections, each page a page
+  // description (a file or written inline), optionally one per value of a column.
+  NodeSpec page_entry_page = [&] {
+    NodeSpec n = page;
+    n.what = "a page description file (relative to the report) or a page description written inline";
+    n.scalar_ok = true;
+    n.scalar = ScalarType::text;
+    return n;
+  }();
+  NodeSpec page_order = [&] {
+    NodeSpec n = list_of("sorted, as-read, or a list of values", &text);
+    n.scalar_ok = true;
+    n.scalar = ScalarType::choice;
+    n.choices = {"sorted", "as-read"};
+    return n;
+  }();
+  NodeSpec one_page_per = mapping("the column a page is repeated for",
+      {{"table", &text, true, "name of a table under the page's 'tables'"},
+       {"column", &text, true, "column of that table: one page for each of its distinct values, each page keeping only that value's rows; $(COLUMN) in the page's text is the value"},
+       {"order", &page_order, false, "as-read (default: order of first appearance), sorted, or the values listed in order"}});
+  NodeSpec page_entry = mapping("a report page",
+      {{"page", &page_entry_page, true, "the page description: a file name, or the description written inline"},
+       {"title", &text, false, "the page's entry in the contents and bookmarks (default: its heading's title)"},
+       {"one-page-per", &one_page_per, false, "repeat the page for each distinct value of a column"}});
+  NodeSpec page_entries = list_of("a list of report pages", &page_entry);
+  NodeSpec section = mapping("a report section",
+      {{"title", &text, true, "section title, in the contents, bookmarks and running head"},
+       {"pages", &page_entries, true, "the section's pages, in order"}});
+  NodeSpec sections = list_of("a list of sections", &section);
+  NodeSpec report = mapping("a report description",
+      {{"title", &text, true, "the report's title: PDF title, running head, contents"},
+       {"running-head", &text, false, "text at the head of every page (default: the title); may use $(section)"},
+       {"running-foot", &text, false, "text at the foot of every page, left of 'page N of M'"},
+       {"contents", &boolean, false, "start with contents pages listing sections and pages (default true)"},
+       {"contents-title", &text, false, "heading of the contents pages (default: Contents)"},
+       {"document", &document, false, "author, subject and keywords for the PDF's document information"},
+       {"sections", &sections, true, "the report's sections, in order"}});
 };
 
 }  // namespace
@@ -287,6 +325,11 @@ struct Schema {
 const NodeSpec& page_schema() {
   static const Schema schema;
   return schema.page;
+}
+
+const NodeSpec& report_schema() {
+  static const Schema schema;
+  return schema.report;
 }
 
 }  // namespace forme

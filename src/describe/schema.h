@@ -52,4 +52,7 @@ struct NodeSpec {
 /// The root of a page description.
 const NodeSpec& page_schema();
 
+/// The root of a report description: sections of pages in one PDF.
+const NodeSpec& report_schema();
+
 }  // namespace forme

@@ -1,0 +1,179 @@
+#include "cli/report_job.h"
+
+#include <chrono>
+#include <future>
+#include <sstream>
+
+#include "cli/render_job.h"
+#include "paint/painter.h"
+#include "report/contents_page.h"
+#include "report/read_report.h"
+#include "report/report_plan.h"
+#include "report/running_furniture.h"
+#include "report/table_cache.h"
+#include "text/font.h"
+
+namespace forme {
+
+namespace {
+
+// A page composed, with what its stages found.
+struct Composed {
+  ComposedDocument doc;
+  DiagnosticSink found;
+};
+
+// Where each planned page lands: its first page (0-based) and how many.
+struct Placement {
+  std::size_t first = 0, count = 1;
+};
+
+void merge(DiagnosticSink& into, const DiagnosticSink& from) {
+  for (const auto& d : from.items()) into.report(d);
+}
+
+std::vector<ContentsRow> contents_rows(const ReportSpec& report, const std::vector<PlannedPage>& plan,
+                                       const std::vector<Placement>& at) {
+  std::vector<ContentsRow> rows;
+  for (std::size_t i = 0; i < plan.size(); ++i) {
+    if (i == 0 || plan[i].section != plan[i - 1].section)
+      rows.push_back({report.sections[plan[i].section].title, true, at[i].first + 1});
+    rows.push_back({plan[i].title, false, at[i].first + 1});
+  }
+  return rows;
+}
+
+std::vector<OutlineEntry> outline(const ReportSpec& report, const std::vector<PlannedPage>& plan,
+                                  const std::vector<Placement>& at, std::size_t contents_pages) {
+  std::vector<OutlineEntry> out;
+  if (contents_pages > 0) out.push_back({report.contents_title, 0, -1});
+  int section = -1;
+  for (std::size_t i = 0; i < plan.size(); ++i) {
+    if (i == 0 || plan[i].section != plan[i - 1].section) {
+      out.push_back({report.sections[plan[i].section].title, at[i].first, -1});
+      section = static_cast<int>(out.size()) - 1;
+    }
+    out.push_back({plan[i].title, at[i].first, section});
+  }
+  return out;
+}
+
+// Contents in lower-case roman numerals, the rest counted on in figures from
+// the physical page number, so the label a reader's page box shows is the
+// number printed in the foot.
+std::vector<PageLabelRange> page_labels(std::size_t contents_pages) {
+  if (contents_pages == 0) return {{0, PageNumberStyle::decimal, 1}};
+  return {{0, PageNumberStyle::lower_roman, 1},
+          {contents_pages, PageNumberStyle::decimal, static_cast<int>(contents_pages) + 1}};
+}
+
+}  // namespace
+
+std::string render_report_to_bytes(const std::string& path, DiagnosticSink& sink, const ReportRunOptions& o) {
+  StageTimes ignored;
+  StageTimes& times = o.times ? *o.times : ignored;
+  auto since = [](std::chrono::steady_clock::time_point t0) {
+    return std::chrono::duration<double>(std::chrono::steady_clock::now() - t0).count();
+  };
+  auto t0 = std::chrono::steady_clock::now();
+  std::vector<Diagnostic> errors;
+  std::optional<ReportSpec> report = read_report(path, errors, o.limits);  // 1. read the report and its pages
+  if (!report) {
+    for (auto& e : errors) sink.report(e);
+    throw InputError(errors.front());
+  }
+  TableCache cache([&](const TableSource& s) { return load_table(s, o.limits); });
+  std::vector<PlannedPage> plan = plan_report(*report, cache, o.limits);  // every page, placeholders filled
+  const FontSet fonts = open_bundled_fonts(o.font_dir);
+  times.read += since(t0);
+
+  // A page followed by table pages is composed now, to count them.
+  std::vector<std::optional<Composed>> early(plan.size());
+  std::vector<Placement> at(plan.size());
+  for (std::size_t i = 0; i < plan.size(); ++i) {
+    if (!plan[i].spec.data.table_page) continue;
+    early[i].emplace();
+    t0 = std::chrono::steady_clock::now();
+    std::vector<Table> tables = take_tables(plan[i], cache);
+    times.data += since(t0);
+    early[i]->doc = compose_spec(plan[i].spec, tables, fonts, early[i]->found, o.limits, &times);
+    at[i].count = early[i]->doc.pages.size();
+  }
+
+  // Number the pages: contents first, then every page in order.
+  const PageSpec& first_spec = plan.front().spec;
+  const PageStyle contents_style = style_for_page(first_spec, fonts);
+  const ContentsSheet sheet{first_spec.sheet.width, first_spec.sheet.height, first_spec.sheet.margins};
+  std::size_t contents = 0;
+  if (report->contents) {
+    const std::size_t rows = contents_rows(*report, plan, at).size();
+    contents = contents_page_count(rows, sheet, contents_style);
+  }
+  std::size_t total = contents;
+  for (std::size_t i = 0; i < plan.size(); ++i) {
+    at[i].first = total;
+    total += at[i].count;
+  }
+
+  PaintOptions po;
+  po.info.title = report->title;
+  po.info.author = report->document.author;
+  po.info.subject = report->document.subject;
+  po.info.keywords = report->document.keywords;
+  po.info.creation_time = o.creation_time;
+  po.info.outline = outline(*report, plan, at, contents);
+  po.info.page_labels = page_labels(contents);
+  std::ostringstream out;
+  auto painter = make_painter(OutputFormat::pdf, out, po);
+
+  std::size_t done = 0;
+  auto paint = [&](DisplayPage& page, const Margins& margins, const PageStyle& style, const std::string& section) {
+    const PlaceholderValues values{{"section", section}};
+    RunningText text;
+    text.head = report->running_head.empty() ? report->title : fill_placeholders(report->running_head.value, values);
+    text.section = section;
+    text.foot = fill_placeholders(report->running_foot.value, values);
+    text.page = done + 1;
+    text.pages = total;
+    add_running_text(page, margins, text, style);
+    if (o.painting) o.painting(page);
+    const auto p0 = std::chrono::steady_clock::now();
+    painter->paint(page);                                              // 7. paint
+    times.paint += since(p0);
+    ++done;
+    if (o.progress) o.progress(done, total);
+  };
+
+  if (contents > 0)
+    for (auto& page : contents_pages(report->contents_title, contents_rows(*report, plan, at), sheet, contents_style))
+      paint(page, sheet.margins, contents_style, report->contents_title);
+
+  // Page i+1 is composed on a second thread while page i is painted. Each
+  // composition starts only after the one before has been collected, so the
+  // table cache is used by one thread at a time.
+  auto compose = [&](std::size_t i) {
+    if (early[i]) return std::move(*early[i]);
+    Composed c;
+    const auto d0 = std::chrono::steady_clock::now();
+    std::vector<Table> tables = take_tables(plan[i], cache);           // 2. load data
+    times.data += since(d0);
+    c.doc = compose_spec(plan[i].spec, tables, fonts, c.found, o.limits, &times);  // 2b-6. series, scales, layout, labels
+    return c;
+  };
+  const auto policy = o.overlap ? std::launch::async : std::launch::deferred;
+  std::future<Composed> next = std::async(policy, compose, 0);
+  for (std::size_t i = 0; i < plan.size(); ++i) {
+    Composed c = next.get();
+    if (i + 1 < plan.size()) next = std::async(policy, compose, i + 1);
+    merge(sink, c.found);
+    const PageStyle style = style_for_page(plan[i].spec, fonts);
+    for (auto& page : c.doc.pages)
+      paint(page, plan[i].spec.sheet.margins, style, report->sections[plan[i].section].title);
+  }
+  const auto f0 = std::chrono::steady_clock::now();
+  painter->finish();
+  times.paint += since(f0);
+  return std::move(out).str();
+}
+
+}  // namespace forme

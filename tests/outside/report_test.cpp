@@ -1,0 +1,183 @@
+// A report: many pages in one PDF. Independent readers check what a reader
+// of the file sees:
+//  - poppler's pdfinfo counts the pages;
+//  - qpdf --json (qpdf's JSON format, version 2) lists the page labels
+//    (ISO 32000-1 §12.4.2: /S /r lower-case roman, /S /D decimal, /St the
+//    first number) and the outline (§12.3.3: each bookmark's title and the
+//    page its destination opens, counted from 1);
+//  - poppler's pdftotext reads "page N of M" on every page, the repeated
+//    pages' titles with the value filled in, and the contents;
+//  - qpdf --check reads the whole file structure (§7.5).
+// What is expected is worked out here from the test report's inputs: the
+// stations are the distinct values of hours.csv's first column, sorted as
+// the report asks.
+#include <catch2/catch.hpp>
+
+#include <algorithm>
+#include <set>
+#include <sstream>
+#include <string>
+#include <vector>
+
+#include "support/outside_tools.h"
+
+using namespace forme::test;
+
+namespace {
+
+const std::string kDir = std::string(FORME_SOURCE_DIR) + "/tests/pages/report";
+const std::string kReport = kDir + "/report.yaml";
+
+std::vector<std::string> stations_sorted() {
+  std::istringstream in(read_file(kDir + "/hours.csv"));
+  std::string line;
+  std::getline(in, line);  // header
+  std::set<std::string> names;
+  while (std::getline(in, line))
+    if (!line.empty()) names.insert(line.substr(0, line.find(',')));
+  return {names.begin(), names.end()};
+}
+
+std::string render_report(const TempDir& dir, const std::string& name, const std::string& env = {}) {
+  const std::string out = dir.file(name);
+  auto r = run(env + " " + FORME_BINARY + " render '" + kReport + "' -o '" + out + "'");
+  INFO(r.err);
+  REQUIRE(r.exit_code == 0);
+  return out;
+}
+
+int pdfinfo_pages(const std::string& pdf) {
+  auto r = run("pdfinfo '" + pdf + "'");
+  REQUIRE(r.exit_code == 0);
+  const auto at = r.out.find("Pages:");
+  REQUIRE(at != std::string::npos);
+  return std::stoi(r.out.substr(at + 6));
+}
+
+std::vector<std::string> lines_of(const std::string& s) {
+  std::vector<std::string> out;
+  std::istringstream in(s);
+  std::string l;
+  while (std::getline(in, l)) out.push_back(l);
+  return out;
+}
+
+std::string page_text(const std::string& pdf, int page) {
+  auto r = run("pdftotext -layout -f " + std::to_string(page) + " -l " + std::to_string(page) + " '" + pdf + "' -");
+  REQUIRE(r.exit_code == 0);
+  return r.out;
+}
+
+// Contents (1 page: 10 rows fit on one A4 page), the overview, one page per
+// station, the rain chart and its table page (12 rows fit on one page).
+int expected_pages() { return 1 + 1 + static_cast<int>(stations_sorted().size()) + 2; }
+
+}  // namespace
+
+TEST_CASE("a report is one PDF with a page per station and pdfinfo counts them", "[outside][report]") {
+  REQUIRE(have_tool("pdfinfo"));
+  TempDir dir;
+  const std::string pdf = render_report(dir, "r.pdf");
+  CHECK(pdfinfo_pages(pdf) == expected_pages());
+  auto check = run("qpdf --check '" + pdf + "'");
+  INFO(check.out << check.err);
+  CHECK(check.exit_code == 0);
+  CHECK(check.out.find("No syntax or stream encoding errors found") != std::string::npos);
+}
+
+TEST_CASE("pdftotext finds page N of M on every page of a report", "[outside][report]") {
+  TempDir dir;
+  const std::string pdf = render_report(dir, "r.pdf");
+  const int m = expected_pages();
+  for (int n = 1; n <= m; ++n) {
+    INFO("page " << n);
+    CHECK(page_text(pdf, n).find("page " + std::to_string(n) + " of " + std::to_string(m)) != std::string::npos);
+  }
+}
+
+TEST_CASE("repeated pages carry their value in the title, in sorted order", "[outside][report]") {
+  TempDir dir;
+  const std::string pdf = render_report(dir, "r.pdf");
+  const auto stations = stations_sorted();
+  REQUIRE(stations.size() == 5);
+  for (std::size_t i = 0; i < stations.size(); ++i) {
+    INFO(stations[i]);
+    // Contents is page 1, the overview page 2; stations from page 3.
+    const std::string text = page_text(pdf, 3 + static_cast<int>(i));
+    CHECK(text.find(stations[i] + " pumping station") != std::string::npos);
+    // The running head names the section through $(section).
+    CHECK(text.find("Harrow Fen Drainage Board (fictional) - Stations") != std::string::npos);
+  }
+  // Each station page shows only its own station's two pumps.
+  CHECK(page_text(pdf, 3).find("North pump") != std::string::npos);
+}
+
+TEST_CASE("the contents page lists sections and pages with their page numbers", "[outside][report]") {
+  TempDir dir;
+  const std::string pdf = render_report(dir, "r.pdf");
+  const auto stations = stations_sorted();
+  std::vector<std::string> lines = lines_of(page_text(pdf, 1));
+  auto row_number = [&](const std::string& title) {
+    for (const auto& l : lines)
+      if (l.find(title) != std::string::npos) {
+        // The page number is the last word of the row (pdftotext -layout).
+        const auto end = l.find_last_not_of(' ');
+        const auto start = l.find_last_of(' ', end);
+        return std::stoi(l.substr(start + 1, end - start));
+      }
+    FAIL("no contents row for " << title);
+    return -1;
+  };
+  CHECK(row_number("All stations") == 2);
+  for (std::size_t i = 0; i < stations.size(); ++i) CHECK(row_number("Station " + stations[i]) == 3 + static_cast<int>(i));
+  CHECK(row_number("Rain at the fen gauge") == 3 + static_cast<int>(stations.size()));
+}
+
+TEST_CASE("qpdf reads roman page labels for the contents and figures after it", "[outside][report]") {
+  REQUIRE(have_tool("qpdf"));
+  TempDir dir;
+  const std::string pdf = render_report(dir, "r.pdf");
+  // One line per label range: index, style, first number (§12.4.2: an
+  // absent /St means 1).
+  auto r = run("qpdf --json=2 --json-key=pagelabels '" + pdf +
+               "' | /usr/bin/python3 -c 'import json,sys\n"
+               "for p in json.load(sys.stdin)[\"pagelabels\"]:\n"
+               "  print(p[\"index\"], p[\"label\"].get(\"/S\"), p[\"label\"].get(\"/St\", 1))'");
+  INFO(r.err);
+  REQUIRE(r.exit_code == 0);
+  CHECK(lines_of(r.out) == std::vector<std::string>{"0 /r 1", "1 /D 2"});
+}
+
+TEST_CASE("qpdf reads a bookmark per section and page, each opening its page", "[outside][report]") {
+  TempDir dir;
+  const std::string pdf = render_report(dir, "r.pdf");
+  auto r = run("qpdf --json=2 --json-key=outlines '" + pdf +
+               "' | /usr/bin/python3 -c 'import json,sys\n"
+               "def walk(items, depth):\n"
+               "  for o in items:\n"
+               "    print(depth, o[\"destpageposfrom1\"], o[\"title\"])\n"
+               "    walk(o[\"kids\"], depth + 1)\n"
+               "walk(json.load(sys.stdin)[\"outlines\"], 0)'");
+  INFO(r.err);
+  REQUIRE(r.exit_code == 0);
+  std::vector<std::string> want{"0 1 Contents", "0 2 Overview", "1 2 All stations", "0 3 Stations"};
+  const auto stations = stations_sorted();
+  for (std::size_t i = 0; i < stations.size(); ++i)
+    want.push_back("1 " + std::to_string(3 + i) + " Station " + stations[i]);
+  const std::string rain = std::to_string(3 + stations.size());
+  want.push_back("0 " + rain + " Rainfall");
+  want.push_back("1 " + rain + " Rain at the fen gauge");
+  CHECK(lines_of(r.out) == want);
+}
+
+TEST_CASE("a report rendered twice with SOURCE_DATE_EPOCH is byte-identical", "[outside][report][reproducible]") {
+  TempDir dir;
+  const std::string a = render_report(dir, "a.pdf", "SOURCE_DATE_EPOCH=1709208000");
+  const std::string b = render_report(dir, "b.pdf", "SOURCE_DATE_EPOCH=1709208000");
+  const std::string bytes = read_file(a);
+  REQUIRE(bytes.size() > 10000);
+  CHECK(bytes == read_file(b));
+  // pdfinfo reads the pinned date (2024-02-29T12:00:00Z).
+  auto info = run("TZ=UTC pdfinfo '" + a + "'");
+  CHECK(info.out.find("Feb 29 12:00:00 2024") != std::string::npos);
+}
