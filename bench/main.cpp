@@ -15,7 +15,7 @@ struct Subcommand {
 constexpr Subcommand kSubcommands[] = {
     {"place", "label placement: greedy vs annealing on random point sets", forme::bench::run_place},
     {"series", "one line panel of N points rendered to PDF in memory", forme::bench::run_series},
-    {"report", "N six-panel pages rendered to PDF one after another", forme::bench::run_report},
+    {"report", "one report of N six-panel pages rendered to one PDF", forme::bench::run_report},
 };
 
 int usage(std::FILE* out) {
