@@ -18,7 +18,7 @@ _forme() {
 
   # Kept equal to forme's commands, palettes (all_palettes()) and starter
   # kinds by tests/outside/install_test.cpp.
-  local commands="render check contrast palette schema new"
+  local commands="render watch check contrast palette schema new"
   local palettes="estuary fjord heath foreshore"
   local kinds="briefing report poster figure"
   local limits="description-bytes= yaml-anchors= yaml-aliases= yaml-expanded-nodes= nesting-depth= panels= table-bytes= pages= points-per-series= labels="
@@ -48,7 +48,7 @@ _forme() {
   done
 
   case $command in
-    render)
+    render | watch)
       case $prev in
         -o | --output)
           COMPREPLY=($(compgen -f -X '!*.@(pdf|svg|png)' -- "$cur") $(compgen -d -- "$cur"))
@@ -66,7 +66,7 @@ _forme() {
           ;;
       esac
       if [[ $cur == -* ]]; then
-        COMPREPLY=($(compgen -W "-o --output --dpi --limit --greyscale --help" -- "$cur"))
+        COMPREPLY=($(compgen -W "-o --output --dpi --limit --greyscale --quiet --help" -- "$cur"))
       else
         COMPREPLY=($(compgen -f -X '!*.@(yaml|yml)' -- "$cur") $(compgen -d -- "$cur"))
         compopt -o filenames 2>/dev/null

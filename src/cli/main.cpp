@@ -13,6 +13,7 @@
 #include "cli/render_job.h"
 #include "cli/signal_cleanup.h"
 #include "cli/starters.h"
+#include "cli/watch.h"
 #include "describe/json_schema.h"
 #include "describe/schema.h"
 #include "paint/painter.h"
@@ -117,6 +118,13 @@ int main(int argc, char** argv) {
   bool quiet = false;
   render_cmd->add_flag("-q,--quiet", quiet, "no progress bar while a report renders");
 
+  forme::RenderOptions watch_options;
+  auto* watch_cmd = app.add_subcommand(
+      "watch", "Render, then render again whenever the description or a file it reads changes (until interrupted).");
+  watch_cmd->add_option("page", watch_options.page_path, "page or report description (YAML)")->required();
+  watch_cmd->add_option("-o,--output", watch_options.output_path, "output file: .pdf, .svg or .png")->required();
+  watch_cmd->add_option("--dpi", watch_options.dpi, "resolution of PNG output")->check(CLI::Range(10.0, 2400.0));
+
   std::string check_page;
   bool strict = false;
   bool check_greyscale = false;
@@ -169,7 +177,7 @@ int main(int argc, char** argv) {
     for (auto* sub : app.get_subcommands({})) known |= sub->get_name() == argv[1];
     if (!known) {
       std::cerr << "forme: error: unknown command '" << argv[1]
-                << "'\n  hint: the commands are render, check, contrast, palette, schema and new\n";
+                << "'\n  hint: the commands are render, watch, check, contrast, palette, schema and new\n";
       return kExitUsage;
     }
   }
@@ -192,6 +200,16 @@ int main(int argc, char** argv) {
   render_options.limits = limits;
   if (*render_cmd) return render(render_options, quiet, argv[0]);
   if (*check_cmd) return check(check_page, strict, check_greyscale, limits, argv[0]);
+  if (*watch_cmd) {
+    if (!forme::format_for_path(watch_options.output_path)) {
+      std::cerr << watch_options.output_path << ": error: unknown output type\n  hint: name the output .pdf, .svg or .png\n";
+      return kExitUsage;
+    }
+    forme::install_signal_cleanup();
+    watch_options.font_dir = forme::find_font_dir(argv[0]);
+    watch_options.limits = limits;
+    return forme::watch_and_render(watch_options);
+  }
   if (*contrast_cmd) return forme::run_contrast(fg, bg, std::cout, std::cerr);
   if (*palette_cmd) {
     if (!sheet_path.empty()) return forme::run_palette_sheet(sheet_path, forme::find_font_dir(argv[0]), std::cerr);

@@ -59,7 +59,7 @@ TEST_CASE("the manual page has no warnings from mandoc -T lint or groff -ww", "[
   CHECK(roff.err.empty());
   // Every command has its own entry.
   const std::string text = read_file(kManPage);
-  for (const char* c : {"render", "check", "contrast", "palette", "schema", "new"})
+  for (const char* c : {"render", "watch", "check", "contrast", "palette", "schema", "new"})
     CHECK(text.find(std::string(".B ") + c) != std::string::npos);
 }
 
@@ -72,9 +72,9 @@ TEST_CASE("the bash completion parses and offers forme's own commands, palettes 
   // Commands: those `forme --help` lists.
   auto help = run_forme("--help");
   std::set<std::string> commands;
-  for (const char* c : {"render", "check", "contrast", "palette", "schema", "new"})
+  for (const char* c : {"render", "watch", "check", "contrast", "palette", "schema", "new"})
     if (help.out.find(std::string("\n  ") + c + " ") != std::string::npos) commands.insert(c);
-  CHECK(commands.size() == 6);
+  CHECK(commands.size() == 7);
   CHECK(offered("forme ") == commands);
   CHECK(offered("forme pa") == std::set<std::string>{"palette"});
 
