@@ -7,6 +7,7 @@
 #include "cli/render_job.h"
 #include "paint/painter.h"
 #include "report/contents_page.h"
+#include "report/cover_page.h"
 #include "report/read_report.h"
 #include "report/report_plan.h"
 #include "report/running_furniture.h"
@@ -28,8 +29,15 @@ struct Placement {
   std::size_t first = 0, count = 1;
 };
 
+// A repeated page repeats its warnings; each is reported once.
 void merge(DiagnosticSink& into, const DiagnosticSink& from) {
-  for (const auto& d : from.items()) into.report(d);
+  for (const auto& d : from.items()) {
+    bool seen = false;
+    for (const auto& e : into.items())
+      seen = seen || (e.loc.file == d.loc.file && e.loc.line == d.loc.line && e.loc.col == d.loc.col &&
+                      e.message == d.message && e.severity == d.severity);
+    if (!seen) into.report(d);
+  }
 }
 
 std::vector<ContentsRow> contents_rows(const ReportSpec& report, const std::vector<PlannedPage>& plan,
@@ -44,9 +52,9 @@ std::vector<ContentsRow> contents_rows(const ReportSpec& report, const std::vect
 }
 
 std::vector<OutlineEntry> outline(const ReportSpec& report, const std::vector<PlannedPage>& plan,
-                                  const std::vector<Placement>& at, std::size_t contents_pages) {
+                                  const std::vector<Placement>& at, std::size_t front_pages, std::size_t contents_pages) {
   std::vector<OutlineEntry> out;
-  if (contents_pages > 0) out.push_back({report.contents_title, 0, -1});
+  if (contents_pages > 0) out.push_back({report.contents_title, front_pages - contents_pages, -1});
   int section = -1;
   for (std::size_t i = 0; i < plan.size(); ++i) {
     if (i == 0 || plan[i].section != plan[i - 1].section) {
@@ -58,13 +66,13 @@ std::vector<OutlineEntry> outline(const ReportSpec& report, const std::vector<Pl
   return out;
 }
 
-// Contents in lower-case roman numerals, the rest counted on in figures from
-// the physical page number, so the label a reader's page box shows is the
-// number printed in the foot.
-std::vector<PageLabelRange> page_labels(std::size_t contents_pages) {
-  if (contents_pages == 0) return {{0, PageNumberStyle::decimal, 1}};
+// Cover and contents in lower-case roman numerals, the rest counted on in
+// figures from the physical page number, so the label a reader's page box
+// shows is the number printed in the foot.
+std::vector<PageLabelRange> page_labels(std::size_t front_pages) {
+  if (front_pages == 0) return {{0, PageNumberStyle::decimal, 1}};
   return {{0, PageNumberStyle::lower_roman, 1},
-          {contents_pages, PageNumberStyle::decimal, static_cast<int>(contents_pages) + 1}};
+          {front_pages, PageNumberStyle::decimal, static_cast<int>(front_pages) + 1}};
 }
 
 }  // namespace
@@ -109,7 +117,8 @@ std::string render_report_to_bytes(const std::string& path, DiagnosticSink& sink
     const std::size_t rows = contents_rows(*report, plan, at).size();
     contents = contents_page_count(rows, sheet, contents_style);
   }
-  std::size_t total = contents;
+  const std::size_t front = (report->cover ? 1 : 0) + contents;  // pages before the first planned page
+  std::size_t total = front;
   for (std::size_t i = 0; i < plan.size(); ++i) {
     at[i].first = total;
     total += at[i].count;
@@ -121,17 +130,21 @@ std::string render_report_to_bytes(const std::string& path, DiagnosticSink& sink
   po.info.subject = report->document.subject;
   po.info.keywords = report->document.keywords;
   po.info.creation_time = o.creation_time;
-  po.info.outline = outline(*report, plan, at, contents);
-  po.info.page_labels = page_labels(contents);
+  po.info.outline = outline(*report, plan, at, front, contents);
+  po.info.page_labels = page_labels(front);
   std::ostringstream out;
   auto painter = make_painter(OutputFormat::pdf, out, po);
 
   std::size_t done = 0;
-  auto paint = [&](DisplayPage& page, const Margins& margins, const PageStyle& style, const std::string& section) {
+  // The cover carries only the foot: its title is the head.
+  auto paint = [&](DisplayPage& page, const Margins& margins, const PageStyle& style, const std::string& section,
+                   bool head = true) {
     const PlaceholderValues values{{"section", section}};
     RunningText text;
-    text.head = report->running_head.empty() ? report->title : fill_placeholders(report->running_head.value, values);
-    text.section = section;
+    if (head) {
+      text.head = report->running_head.empty() ? report->title : fill_placeholders(report->running_head.value, values);
+      text.section = section;
+    }
     text.foot = fill_placeholders(report->running_foot.value, values);
     text.page = done + 1;
     text.pages = total;
@@ -144,6 +157,11 @@ std::string render_report_to_bytes(const std::string& path, DiagnosticSink& sink
     if (o.progress) o.progress(done, total);
   };
 
+  if (report->cover) {
+    DisplayPage page = cover_page(report->cover_title.empty() ? report->title : report->cover_title,
+                                  report->cover_lines, sheet, contents_style);
+    paint(page, sheet.margins, contents_style, "", false);
+  }
   if (contents > 0)
     for (auto& page : contents_pages(report->contents_title, contents_rows(*report, plan, at), sheet, contents_style))
       paint(page, sheet.margins, contents_style, report->contents_title);

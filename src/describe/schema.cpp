@@ -310,10 +310,14 @@ struct Schema {
       {{"title", &text, true, "section title, in the contents, bookmarks and running head"},
        {"pages", &page_entries, true, "the section's pages, in order"}});
   NodeSpec sections = list_of("a list of sections", &section);
+  NodeSpec cover = mapping("the report's cover",
+      {{"title", &text, false, "the cover's title (default: the report's title)"},
+       {"lines", &text_list, false, "lines under the title: who issues the report, for which period"}});
   NodeSpec report = mapping("a report description",
       {{"title", &text, true, "the report's title: PDF title, running head, contents"},
        {"running-head", &text, false, "text at the head of every page (default: the title); may use $(section)"},
        {"running-foot", &text, false, "text at the foot of every page, left of 'page N of M'"},
+       {"cover", &cover, false, "a cover page first: the title set large and a few lines under it"},
        {"contents", &boolean, false, "start with contents pages listing sections and pages (default true)"},
        {"contents-title", &text, false, "heading of the contents pages (default: Contents)"},
        {"document", &document, false, "author, subject and keywords for the PDF's document information"},

@@ -41,6 +41,12 @@ class ReportBuilder {
     if (r["running-foot"]) s.running_foot = located(r["running-foot"]);
     for (const char* key : {"running-head", "running-foot"})
       if (r[key]) check_placeholders(doc_, r[key], {"section"}, errors_);
+    if (auto c = r["cover"]) {
+      s.cover = true;
+      if (c["title"]) s.cover_title = c["title"].Scalar();
+      if (auto lines = c["lines"])
+        for (const auto& l : lines) s.cover_lines.push_back(l.Scalar());
+    }
     if (r["contents"]) s.contents = r["contents"].Scalar() == "true";
     if (r["contents-title"]) s.contents_title = r["contents-title"].Scalar();
     if (auto d = r["document"]) {

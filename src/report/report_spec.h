@@ -40,6 +40,9 @@ struct ReportSpec {
   std::string base_dir;  ///< folder that page files are found from
   std::string title;
   Located running_head, running_foot;  ///< may hold $(section)
+  bool cover = false;
+  std::string cover_title;               ///< empty = the report's title
+  std::vector<std::string> cover_lines;
   bool contents = true;
   std::string contents_title = "Contents";
   DocumentSpec document;

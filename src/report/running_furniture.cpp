@@ -37,7 +37,7 @@ void add_running_text(DisplayPage& page, const Margins& m, const RunningText& te
   // Centred in each margin (the text's box, ascender to descender).
   const double head = m.top / 2 + (asc - desc) / 2;
   const double foot = page.height - m.bottom / 2 + (asc - desc) / 2;
-  set_line(page, m, head, text.head, text.section, st);
+  if (!text.head.empty() || !text.section.empty()) set_line(page, m, head, text.head, text.section, st);
   set_line(page, m, foot, text.foot, page_n_of_m(text.page, text.pages), st);
 }
 

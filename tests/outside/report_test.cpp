@@ -70,6 +70,10 @@ std::string page_text(const std::string& pdf, int page) {
 
 // Contents (1 page: 10 rows fit on one A4 page), the overview, one page per
 // station, the rain chart and its table page (12 rows fit on one page).
+std::string page_n_of_m_text(std::size_t n, std::size_t m) {
+  return "page " + std::to_string(n) + " of " + std::to_string(m);
+}
+
 int expected_pages() { return 1 + 1 + static_cast<int>(stations_sorted().size()) + 2; }
 
 }  // namespace
@@ -180,4 +184,39 @@ TEST_CASE("a report rendered twice with SOURCE_DATE_EPOCH is byte-identical", "[
   // pdfinfo reads the pinned date (2024-02-29T12:00:00Z).
   auto info = run("TZ=UTC pdfinfo '" + a + "'");
   CHECK(info.out.find("Feb 29 12:00:00 2024") != std::string::npos);
+}
+
+TEST_CASE("every report under layouts renders with no two lines of text overlapping on any page", "[outside][report]") {
+  const auto reports = layout_reports();
+  REQUIRE(!reports.empty());
+  for (const auto& report : reports) {
+    INFO(report);
+    TempDir dir;
+    const std::string pdf = dir.file("r.pdf");
+    auto r = run_forme("render -q '" + report + "' -o '" + pdf + "'");
+    INFO(r.err);
+    REQUIRE(r.exit_code == 0);
+    const auto pages = pdf_lines(pdf);
+    REQUIRE(pages.size() >= 14);
+    for (std::size_t p = 0; p < pages.size(); ++p) {
+      const auto& lines = pages[p].words;
+      // Boxes as poppler measures them; touching edges are not an overlap.
+      for (std::size_t i = 0; i < lines.size(); ++i)
+        for (std::size_t j = i + 1; j < lines.size(); ++j) {
+          const auto& a = lines[i];
+          const auto& b = lines[j];
+          const bool overlap = a.x_min < b.x_max - 0.01 && b.x_min < a.x_max - 0.01 && a.y_min < b.y_max - 0.01 &&
+                               b.y_min < a.y_max - 0.01;
+          INFO("page " << p + 1 << ": '" << a.text << "' and '" << b.text << "'");
+          CHECK(!overlap);
+        }
+      const std::string foot = page_n_of_m_text(p + 1, pages.size());
+      bool found = false;
+      for (const auto& l : lines) found = found || l.text.find(foot) != std::string::npos;
+      INFO("page " << p + 1 << " lacks '" << foot << "'");
+      CHECK(found);
+    }
+    auto check = run("qpdf --check '" + pdf + "'");
+    CHECK(check.exit_code == 0);
+  }
 }

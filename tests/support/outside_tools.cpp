@@ -122,12 +122,31 @@ std::vector<PdfPageWords> pdf_lines(const std::string& pdf) {
   return parse_bbox(r.out, "line");
 }
 
-std::vector<std::string> layout_pages() {
+namespace {
+
+// A report description has a top-level `sections` key; a page made to be
+// repeated by a report holds $( placeholders.
+enum class YamlKind { page, report, template_page };
+
+YamlKind kind_of(const std::string& path) {
+  const std::string text = read_file(path);
+  if (text.rfind("sections:", 0) == 0 || text.find("\nsections:") != std::string::npos) return YamlKind::report;
+  if (text.find("$(") != std::string::npos) return YamlKind::template_page;
+  return YamlKind::page;
+}
+
+std::vector<std::string> layout_files(YamlKind kind) {
   std::vector<std::string> out;
   for (const auto& e : std::filesystem::recursive_directory_iterator(std::string(FORME_SOURCE_DIR) + "/layouts"))
-    if (e.path().extension() == ".yaml") out.push_back(e.path().string());
+    if (e.path().extension() == ".yaml" && kind_of(e.path().string()) == kind) out.push_back(e.path().string());
   std::sort(out.begin(), out.end());
   return out;
 }
+
+}  // namespace
+
+std::vector<std::string> layout_pages() { return layout_files(YamlKind::page); }
+
+std::vector<std::string> layout_reports() { return layout_files(YamlKind::report); }
 
 }  // namespace forme::test

@@ -59,7 +59,11 @@ std::vector<PdfPageWords> pdf_lines(const std::string& pdf);
 /// laid out into lines and blocks).
 std::vector<PdfPageWords> pdf_layout_words(const std::string& pdf);
 
-/// Every page description under layouts/.
+/// Every page description under layouts/ (not reports, nor the pages a
+/// report repeats, which hold placeholders).
 std::vector<std::string> layout_pages();
+
+/// Every report description under layouts/.
+std::vector<std::string> layout_reports();
 
 }  // namespace forme::test
