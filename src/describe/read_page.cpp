@@ -453,7 +453,7 @@ class Builder {
       for (auto it = list.begin(); it != list.end(); ++it) {
         SeriesLookSpec look;
         look.name = located(it->first);
-        const YAML::Node& v = it->second;
+        const YAML::Node v = it->second;  // a copy: the iterator hands out a temporary pair
         const YAML::Node colour_node = v.IsScalar() ? v : v["colour"];
         if (colour_node) {
           ParsedColour parsed = parse_colour(colour_node.Scalar());

@@ -124,7 +124,9 @@ TEST_CASE("stacked bars: each value is written inside its segment at 4.5:1, or r
   const std::string pdf = dir.file("stacked.pdf");
   REQUIRE(run_forme("render '" + kPage + "' -o '" + pdf + "'").exit_code == 0);
   int found = 0;
-  for (const auto& w : pdf_words(pdf).front().words) {
+  const auto pages = pdf_words(pdf);  // kept: a range-for over a temporary's member would dangle
+  REQUIRE(!pages.empty());
+  for (const auto& w : pages.front().words) {
     if (w.text.find_first_not_of("0123456789,") != std::string::npos) continue;
     for (const auto& s : segs)
       if (s.r.x - 0.5 <= w.x_min && w.x_max <= s.r.right() + 0.5 && s.r.y - 0.5 <= w.y_min && w.y_max <= s.r.bottom() + 0.5) {
