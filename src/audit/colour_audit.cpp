@@ -5,6 +5,7 @@
 #include <set>
 #include <tuple>
 
+#include "base/fixed_decimals.h"
 #include "colour/audit.h"
 #include "colour/contrast.h"
 #include "colour/cvd.h"
@@ -16,12 +17,6 @@
 namespace forme {
 
 namespace {
-
-std::string fixed(double v, int decimals) {
-  char buf[32];
-  std::snprintf(buf, sizeof buf, "%.*f", decimals, v);
-  return buf;
-}
 
 std::string quoted(const std::string& name) { return name.empty() ? "the unnamed series" : "'" + name + "'"; }
 

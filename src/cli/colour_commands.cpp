@@ -3,6 +3,7 @@
 #include <cstdio>
 #include <sstream>
 
+#include "base/fixed_decimals.h"
 #include "base/diagnostic.h"
 #include "colour/audit.h"
 #include "colour/contrast.h"
@@ -18,12 +19,6 @@
 namespace forme {
 
 namespace {
-
-std::string fixed(double v, int decimals) {
-  char buf[32];
-  std::snprintf(buf, sizeof buf, "%.*f", decimals, v);
-  return buf;
-}
 
 bool read_colour(const std::string& text, Rgb& out, std::ostream& err) {
   ParsedColour p = parse_colour(text);

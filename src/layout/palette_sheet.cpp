@@ -2,18 +2,13 @@
 
 #include <cstdio>
 
+#include "base/fixed_decimals.h"
 #include "colour/palette_review.h"
 #include "layout/text_items.h"
 
 namespace forme {
 
 namespace {
-
-std::string fixed(double v, int decimals) {
-  char buf[32];
-  std::snprintf(buf, sizeof buf, "%.*f", decimals, v);
-  return buf;
-}
 
 PathItem swatch(double x, double y, double w, double h, Rgb fill) {
   PathItem p;
