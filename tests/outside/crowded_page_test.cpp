@@ -80,6 +80,7 @@ TEST_CASE("every layout page: pdftotext -bbox-layout finds no two overlapping wo
     INFO(page);
     const std::string pdf = dir.file("page.pdf");
     auto r = run_forme("render '" + page + "' -o '" + pdf + "'");
+    INFO(r.err);
     REQUIRE(r.exit_code == 0);
     require_no_overlaps(pdf_layout_words(pdf));
   }
