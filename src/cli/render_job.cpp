@@ -9,6 +9,7 @@
 #include <ctime>
 #include <filesystem>
 #include <optional>
+#include <span>
 #include <sstream>
 
 #include "audit/missing_glyphs.h"
@@ -156,7 +157,10 @@ ComposedDocument compose_spec(PageSpec spec, const std::vector<Table>& tables, c
   for (const auto& d : sink.items())
     if (d.severity == Severity::error) throw InputError(d);  // reported already; stops the write
   // What travels with the chart: the rows plotted, the page in words.
-  const std::vector<PlottedRows> plotted = plotted_rows(spec, panels, tables);
+  // Gathered only when something carries them: a million-row table costs
+  // a second to write out again.
+  const std::vector<PlottedRows> plotted =
+      spec.data.attach || spec.data.table_page ? plotted_rows(spec, panels, tables) : std::vector<PlottedRows>{};
   if (spec.data.table_page)
     for (auto& p : data_table_pages(spec, plotted, style)) doc.pages.push_back(std::move(p));
   if (doc.pages.size() > limits.pages)
@@ -169,7 +173,7 @@ ComposedDocument compose_spec(PageSpec spec, const std::vector<Table>& tables, c
   // Each panel in words, for the tagged PDF's figure alternate text.
   auto& figures = doc.pages.front().figures;
   for (std::size_t i = 0; i < figures.size() && i < panels.size(); ++i)
-    figures[i].alt = describe_chart(spec, {panels[i]}, {axes[i]});
+    figures[i].alt = describe_chart(spec, std::span(panels).subspan(i, 1), std::span(axes).subspan(i, 1));
   // Last, the press sheet around each trimmed page: bleed, marks, slug.
   const PressSpec& press = spec.sheet.press;
   const long long today = parse_source_date_epoch(std::getenv("SOURCE_DATE_EPOCH")).value_or(std::time(nullptr));

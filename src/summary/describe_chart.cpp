@@ -42,8 +42,8 @@ std::string plural(std::size_t n, const std::string& one, const std::string& man
 
 }  // namespace
 
-std::string describe_chart(const PageSpec& page, const std::vector<PanelData>& panels,
-                           const std::vector<PanelAxes>& axes) {
+std::string describe_chart(const PageSpec& page, std::span<const PanelData> panels,
+                           std::span<const PanelAxes> axes) {
   if (panels.empty()) return {};
   std::string out;
   const PanelData& first = panels.front();

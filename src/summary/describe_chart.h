@@ -7,8 +7,8 @@
 /// Example: "Line chart of Stored (% of capacity) by month. 3 series: 2024,
 /// 2025, 2026. 6 panels, one per reservoir, on one shared scale. Panel
 /// 'North': 36 rows, Stored from 41 to 97."
+#include <span>
 #include <string>
-#include <vector>
 
 #include "axes/axis.h"
 #include "describe/page_spec.h"
@@ -16,7 +16,8 @@
 
 namespace forme {
 
-std::string describe_chart(const PageSpec& page, const std::vector<PanelData>& panels,
-                           const std::vector<PanelAxes>& axes);
+/// Takes spans so one panel can be described without copying its data.
+std::string describe_chart(const PageSpec& page, std::span<const PanelData> panels,
+                           std::span<const PanelAxes> axes);
 
 }  // namespace forme
