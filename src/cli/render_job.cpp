@@ -248,7 +248,13 @@ RenderResult render_file(const RenderOptions& o) {
     std::error_code ec;
     if (std::filesystem::equivalent(o.output_path, o.page_path, ec))
       throw InputError(SourceLoc{o.output_path}, "output would overwrite the page description");
-    std::string bytes;
+    CleanupPathScope forget_temp;
+    std::optional<AtomicFile> file;
+    auto open_output = [&] {
+      SignalBlock no_signals_until_registered;
+      file.emplace(o.output_path);
+      set_cleanup_path(file->temp_path().c_str());
+    };
     if (is_report_description(o.page_path)) {
       if (*format != OutputFormat::pdf)
         throw InputError(SourceLoc{o.output_path}, "a report is written as one PDF of many pages",
@@ -258,18 +264,15 @@ RenderResult render_file(const RenderOptions& o) {
       ro.limits = o.limits;
       ro.progress = o.progress;
       ro.creation_time = parse_source_date_epoch(std::getenv("SOURCE_DATE_EPOCH"));
-      bytes = render_report_to_bytes(o.page_path, sink, ro);
+      // Straight into the output's temporary file: a report of any length
+      // is never held in memory whole.
+      open_output();
+      render_report(o.page_path, sink, ro, file->stream());
     } else {
-      bytes = render_to_bytes(o.page_path, *format, o.font_dir, o.dpi, sink, o.limits, o.greyscale);
+      const std::string bytes = render_to_bytes(o.page_path, *format, o.font_dir, o.dpi, sink, o.limits, o.greyscale);
+      open_output();
+      file->write(bytes);
     }
-    CleanupPathScope forget_temp;
-    std::optional<AtomicFile> file;
-    {
-      SignalBlock no_signals_until_registered;
-      file.emplace(o.output_path);
-      set_cleanup_path(file->temp_path().c_str());
-    }
-    file->write(bytes);
     pause_for_tests();
     file->commit();
   });

@@ -1,9 +1,9 @@
 #include "cli/report_job.h"
 
 #include <chrono>
-#include <future>
 #include <sstream>
 
+#include "base/lookahead.h"
 #include "cli/render_job.h"
 #include "paint/painter.h"
 #include "report/contents_page.h"
@@ -78,6 +78,12 @@ std::vector<PageLabelRange> page_labels(std::size_t front_pages) {
 }  // namespace
 
 std::string render_report_to_bytes(const std::string& path, DiagnosticSink& sink, const ReportRunOptions& o) {
+  std::ostringstream out;
+  render_report(path, sink, o, out);
+  return std::move(out).str();
+}
+
+void render_report(const std::string& path, DiagnosticSink& sink, const ReportRunOptions& o, std::ostream& out) {
   StageTimes ignored;
   StageTimes& times = o.times ? *o.times : ignored;
   auto since = [](std::chrono::steady_clock::time_point t0) {
@@ -132,7 +138,6 @@ std::string render_report_to_bytes(const std::string& path, DiagnosticSink& sink
   po.info.creation_time = o.creation_time;
   po.info.outline = outline(*report, plan, at, front, contents);
   po.info.page_labels = page_labels(front);
-  std::ostringstream out;
   auto painter = make_painter(OutputFormat::pdf, out, po);
 
   std::size_t done = 0;
@@ -166,9 +171,8 @@ std::string render_report_to_bytes(const std::string& path, DiagnosticSink& sink
     for (auto& page : contents_pages(report->contents_title, contents_rows(*report, plan, at), sheet, contents_style))
       paint(page, sheet.margins, contents_style, report->contents_title);
 
-  // Page i+1 is composed on a second thread while page i is painted. Each
-  // composition starts only after the one before has been collected, so the
-  // table cache is used by one thread at a time.
+  // Later pages are composed on a second thread while earlier ones are
+  // painted. Only that thread uses the table cache once painting starts.
   auto compose = [&](std::size_t i) {
     if (early[i]) return std::move(*early[i]);
     Composed c;
@@ -178,11 +182,11 @@ std::string render_report_to_bytes(const std::string& path, DiagnosticSink& sink
     c.doc = compose_spec(plan[i].spec, tables, fonts, c.found, o.limits, &times);  // 2b-6. series, scales, layout, labels
     return c;
   };
-  const auto policy = o.overlap ? std::launch::async : std::launch::deferred;
-  std::future<Composed> next = std::async(policy, compose, 0);
+  // Two pages ahead evens out pages that take longer to compose than to
+  // paint, and keeps memory to a few pages whatever the report's length.
+  Lookahead<Composed> composed(plan.size(), 2, compose, o.overlap);
   for (std::size_t i = 0; i < plan.size(); ++i) {
-    Composed c = next.get();
-    if (i + 1 < plan.size()) next = std::async(policy, compose, i + 1);
+    Composed c = composed.next();
     merge(sink, c.found);
     const PageStyle style = style_for_page(plan[i].spec, fonts);
     for (auto& page : c.doc.pages)
@@ -191,7 +195,6 @@ std::string render_report_to_bytes(const std::string& path, DiagnosticSink& sink
   const auto f0 = std::chrono::steady_clock::now();
   painter->finish();
   times.paint += since(f0);
-  return std::move(out).str();
 }
 
 }  // namespace forme

@@ -8,6 +8,7 @@
 #include <cstdint>
 #include <functional>
 #include <optional>
+#include <ostream>
 #include <string>
 
 #include "base/diagnostic.h"
@@ -33,9 +34,12 @@ struct ReportRunOptions {
   std::function<void(const DisplayPage&)> painting;
 };
 
-/// Renders the report at `path` to PDF bytes. Warnings go to `sink`;
-/// throws InputError for the first error (already in `sink` when found by
-/// a stage that collects).
+/// Renders the report at `path` as one PDF written to `out` when it is
+/// finished. Warnings go to `sink`; throws InputError for the first error
+/// (already in `sink` when found by a stage that collects).
+void render_report(const std::string& path, DiagnosticSink& sink, const ReportRunOptions& options, std::ostream& out);
+
+/// As render_report, into memory (tests, benchmarks).
 std::string render_report_to_bytes(const std::string& path, DiagnosticSink& sink, const ReportRunOptions& options);
 
 }  // namespace forme

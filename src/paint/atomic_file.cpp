@@ -42,9 +42,9 @@ AtomicFile::~AtomicFile() {
   if (!committed_ && !temp_.empty()) ::unlink(temp_.c_str());
 }
 
-void AtomicFile::write(const std::string& bytes) {
-  const char* p = bytes.data();
-  std::size_t left = bytes.size();
+void AtomicFile::write(const std::string& bytes) { write(bytes.data(), bytes.size()); }
+
+void AtomicFile::write(const char* p, std::size_t left) {
   while (left > 0) {
     ssize_t n = ::write(fd_, p, left);
     if (n < 0) {
@@ -56,7 +56,32 @@ void AtomicFile::write(const std::string& bytes) {
   }
 }
 
+std::ostream& AtomicFile::stream() {
+  if (!stream_) {
+    buffer_ = std::make_unique<Buffer>(*this);
+    stream_ = std::make_unique<std::ostream>(buffer_.get());
+    stream_->exceptions(std::ios::badbit);  // the write's own error, not a bare failed stream
+  }
+  return *stream_;
+}
+
+int AtomicFile::Buffer::sync() {
+  file_.write(pbase(), static_cast<std::size_t>(pptr() - pbase()));
+  setp(bytes_.data(), bytes_.data() + bytes_.size());
+  return 0;
+}
+
+AtomicFile::Buffer::int_type AtomicFile::Buffer::overflow(int_type c) {
+  sync();
+  if (!traits_type::eq_int_type(c, traits_type::eof())) {
+    *pptr() = traits_type::to_char_type(c);
+    pbump(1);
+  }
+  return traits_type::not_eof(c);
+}
+
 void AtomicFile::commit() {
+  if (stream_) stream_->flush();
   if (::fsync(fd_) != 0 || ::close(fd_) != 0) {
     fd_ = -1;
     throw InputError(SourceLoc{target_}, std::string("cannot write output: ") + std::strerror(errno));
