@@ -1,7 +1,8 @@
 #pragma once
-/// Lets Cairo surfaces write into a std::ostream.
+/// Lets Cairo surfaces write into a std::ostream or a C file.
 #include <cairo.h>
 
+#include <cstdio>
 #include <ostream>
 
 namespace forme {
@@ -10,6 +11,11 @@ inline cairo_status_t write_to_ostream(void* closure, const unsigned char* data,
   auto* out = static_cast<std::ostream*>(closure);
   out->write(reinterpret_cast<const char*>(data), static_cast<std::streamsize>(length));
   return *out ? CAIRO_STATUS_SUCCESS : CAIRO_STATUS_WRITE_ERROR;
+}
+
+inline cairo_status_t write_to_file(void* closure, const unsigned char* data, unsigned int length) {
+  return std::fwrite(data, 1, length, static_cast<std::FILE*>(closure)) == length ? CAIRO_STATUS_SUCCESS
+                                                                                   : CAIRO_STATUS_WRITE_ERROR;
 }
 
 /// Throws std::runtime_error when a surface or context is in error.

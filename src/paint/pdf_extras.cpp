@@ -1,7 +1,6 @@
 #include "paint/pdf_extras.h"
 
-// qpdf 11: use std::shared_ptr only, never its older PointerHolder.
-#define POINTERHOLDER_TRANSITION 4
+#include "paint/pdf_update.h"  // first: it sets qpdf's pointer mode
 
 #include <qpdf/Buffer.hh>
 #include <qpdf/QPDF.hh>
@@ -10,15 +9,29 @@
 #include <qpdf/QPDFExc.hh>
 #include <qpdf/QPDFFileSpecObjectHelper.hh>
 #include <qpdf/QPDFPageDocumentHelper.hh>
-#include <qpdf/QPDFWriter.hh>
+#include <qpdf/QPDFXRefEntry.hh>
 
+#include <cctype>
+#include <cstdio>
+#include <map>
+#include <set>
 #include <stdexcept>
+#include <string>
+#include <string_view>
+#include <vector>
 
 namespace forme {
 
 namespace {
 
-void embed(QPDF& q, const std::vector<EmbeddedFile>& files) {
+// The existing objects an edit changes, to be written again.
+using Changed = std::set<QPDFObjGen>;
+
+void mark(Changed& changed, QPDFObjectHandle o) {
+  if (o.isIndirect()) changed.insert(o.getObjGen());
+}
+
+void embed(QPDF& q, const std::vector<EmbeddedFile>& files, Changed& changed) {
   QPDFEmbeddedFileDocumentHelper tree(q);
   auto associated = QPDFObjectHandle::newArray();
   for (const auto& f : files) {
@@ -33,9 +46,16 @@ void embed(QPDF& q, const std::vector<EmbeddedFile>& files) {
     associated.appendItem(spec.getObjectHandle());
   }
   q.getRoot().replaceKey("/AF", associated);
+  mark(changed, q.getRoot());
+  QPDFObjectHandle names = q.getRoot().getKey("/Names");
+  mark(changed, names);
+  if (names.isDictionary()) mark(changed, names.getKey("/EmbeddedFiles"));
 }
 
-void link(QPDF& q, const std::vector<PageLinks>& pages) {
+void link(QPDF& q, const std::vector<PageLinks>& pages, Changed& changed) {
+  bool any = false;
+  for (const auto& p : pages) any = any || !p.links.empty();
+  if (!any) return;  // reading every page costs memory in a long report
   auto all = QPDFPageDocumentHelper(q).getAllPages();
   for (std::size_t i = 0; i < pages.size() && i < all.size(); ++i) {
     if (pages[i].links.empty()) continue;
@@ -45,6 +65,8 @@ void link(QPDF& q, const std::vector<PageLinks>& pages) {
       annots = QPDFObjectHandle::newArray();
       page.replaceKey("/Annots", annots);
     }
+    mark(changed, page);
+    mark(changed, annots);
     const double h = pages[i].height;
     for (const auto& l : pages[i].links) {
       auto action = QPDFObjectHandle::newDictionary();
@@ -64,7 +86,10 @@ void link(QPDF& q, const std::vector<PageLinks>& pages) {
 }
 
 // Page boxes in user space, y up from the page's foot (ISO 32000-1 §8.3.2.3).
-void set_boxes(QPDF& q, const std::vector<PageLinks>& pages) {
+void set_boxes(QPDF& q, const std::vector<PageLinks>& pages, Changed& changed) {
+  bool any = false;
+  for (const auto& p : pages) any = any || p.trim_box || p.bleed_box;
+  if (!any) return;
   auto all = QPDFPageDocumentHelper(q).getAllPages();
   for (std::size_t i = 0; i < pages.size() && i < all.size(); ++i) {
     QPDFObjectHandle page = all[i].getObjectHandle();
@@ -74,26 +99,83 @@ void set_boxes(QPDF& q, const std::vector<PageLinks>& pages) {
     };
     if (pages[i].trim_box) page.replaceKey("/TrimBox", box(*pages[i].trim_box));
     if (pages[i].bleed_box) page.replaceKey("/BleedBox", box(*pages[i].bleed_box));
+    if (pages[i].trim_box || pages[i].bleed_box) mark(changed, page);
   }
 }
 
-// Depth-first through the structure tree, in the order of its /K arrays,
-// which is the reading order Cairo wrote.
-void set_figure_alts(QPDFObjectHandle node, const std::vector<std::string>& alts, std::size_t& next, int depth) {
-  if (depth > 64 || next >= alts.size()) return;
-  if (node.isArray()) {
-    for (int i = 0; i < node.getArrayNItems(); ++i) set_figure_alts(node.getArrayItem(i), alts, next, depth + 1);
-    return;
+// The text of indirect object `id`, from "N G obj" to "endobj", read from
+// the file at its cross-reference offset; empty if it cannot be found.
+std::string object_text(std::FILE* file, const std::map<QPDFObjGen, QPDFXRefEntry>& xref, QPDFObjGen id) {
+  const auto entry = xref.find(id);
+  if (entry == xref.end() || entry->second.getType() != 1) return {};
+  if (std::fseek(file, static_cast<long>(entry->second.getOffset()), SEEK_SET) != 0) return {};
+  std::string text;
+  char block[4096];
+  while (text.size() < (1u << 20)) {
+    const std::size_t n = std::fread(block, 1, sizeof block, file);
+    if (n == 0) return {};
+    text.append(block, n);
+    if (const std::size_t end = text.find("endobj"); end != std::string::npos) {
+      text.resize(end + 6);
+      return text;
+    }
   }
-  if (!node.isDictionary()) return;
-  QPDFObjectHandle s = node.getKey("/S");
-  if (s.isName() && s.getName() == "/Figure") node.replaceKey("/Alt", QPDFObjectHandle::newUnicodeString(alts[next++]));
-  set_figure_alts(node.getKey("/K"), alts, next, depth + 1);
+  return {};
+}
+
+bool is_delimiter(char c) {
+  return std::isspace(static_cast<unsigned char>(c)) || std::string_view("()<>[]{}/%").find(c) != std::string_view::npos;
+}
+
+// Whether a structure element's text names its type /Figure (the /S key).
+bool is_figure_element(const std::string& text) {
+  for (std::size_t at = text.find("/S"); at != std::string::npos; at = text.find("/S", at + 2)) {
+    std::size_t i = at + 2;
+    if (i >= text.size() || !is_delimiter(text[i])) continue;  // /Subtype, /StructParents…
+    while (i < text.size() && std::isspace(static_cast<unsigned char>(text[i]))) ++i;
+    const std::string_view figure = "/Figure";
+    return text.compare(i, figure.size(), figure) == 0 &&
+           (i + figure.size() >= text.size() || is_delimiter(text[i + figure.size()]));
+  }
+  return false;
+}
+
+// Cairo writes the structure tree as a Document element whose children are
+// the elements of every page in drawing order, each a small dictionary.
+// Thousands of them read through qpdf would cost over a kilobyte each in
+// its object cache, so the children are read as text: each /Figure gets its
+// /Alt added just inside its "<<", the k-th figure the k-th text.
+std::map<QPDFObjGen, std::string> figures_with_alts(QPDF& q, std::FILE* file, const std::vector<std::string>& alts) {
+  std::map<QPDFObjGen, std::string> out;
+  // Down through the grouping elements to the list of page elements.
+  QPDFObjectHandle node = q.getRoot().getKey("/StructTreeRoot").getKey("/K");
+  for (int depth = 0; depth < 8; ++depth) {
+    if (node.isArray() && node.getArrayNItems() == 1) node = node.getArrayItem(0);
+    QPDFObjectHandle type = node.isDictionary() ? node.getKey("/S") : QPDFObjectHandle::newNull();
+    if (!type.isName() || (type.getName() != "/Document" && type.getName() != "/Part" && type.getName() != "/Sect"))
+      break;
+    node = node.getKey("/K");
+  }
+  std::vector<QPDFObjectHandle> kids;
+  if (node.isArray()) kids = node.getArrayAsVector();
+  else kids.push_back(node);
+  const auto xref = q.getXRefTable();
+  std::size_t next = 0;
+  for (std::size_t i = 0; i < kids.size() && next < alts.size(); ++i) {
+    QPDFObjectHandle kid = kids[i];
+    if (!kid.isIndirect()) continue;
+    std::string text = object_text(file, xref, kid.getObjGen());
+    const std::size_t open = text.find("<<");
+    if (open == std::string::npos || !is_figure_element(text)) continue;
+    text.insert(open + 2, " /Alt " + QPDFObjectHandle::newUnicodeString(alts[next++]).unparse());
+    out.emplace(kid.getObjGen(), text + "\n");
+  }
+  return out;
 }
 
 // A flat number tree (ISO 32000-1 §7.9.7) of page label dictionaries
 // (§12.4.2): /S /D decimal or /S /r lower-case roman, /St the first number.
-void label(QPDF& q, const std::vector<PageLabelRange>& labels) {
+void label(QPDF& q, const std::vector<PageLabelRange>& labels, Changed& changed) {
   auto nums = QPDFObjectHandle::newArray();
   for (const auto& r : labels) {
     auto d = QPDFObjectHandle::newDictionary();
@@ -104,41 +186,40 @@ void label(QPDF& q, const std::vector<PageLabelRange>& labels) {
   }
   auto tree = QPDFObjectHandle::newDictionary();
   tree.replaceKey("/Nums", nums);
-  q.getRoot().replaceKey("/PageLabels", q.makeIndirectObject(tree));
+  // Direct in the catalog: making an indirect object has qpdf read every
+  // object in the file first, which for a long report costs more memory
+  // than the whole rest of the run.
+  q.getRoot().replaceKey("/PageLabels", tree);
+  mark(changed, q.getRoot());
 }
 
 }  // namespace
 
-std::string add_pdf_extras(const std::string& pdf, const std::vector<EmbeddedFile>& files,
+void write_pdf_with_extras(std::FILE* cairo_pdf, const std::string& date, const std::vector<EmbeddedFile>& files,
                            const std::vector<PageLinks>& pages, const std::vector<std::string>& figure_alts,
-                           const std::vector<PageLabelRange>& labels) {
-  bool any_link = false;
-  bool any_box = false;
-  for (const auto& p : pages) any_link = any_link || !p.links.empty(), any_box = any_box || p.trim_box || p.bleed_box;
-  if (files.empty() && !any_link && !any_box && figure_alts.empty() && labels.empty()) return pdf;
+                           const std::vector<PageLabelRange>& labels, std::ostream& out) {
   try {
     QPDF q;
     q.setSuppressWarnings(true);
-    q.processMemoryFile("forme output", pdf.data(), pdf.size());
-    if (!files.empty()) embed(q, files);
-    link(q, pages);
-    set_boxes(q, pages);
-    if (!figure_alts.empty()) {
-      std::size_t next = 0;
-      QPDFObjectHandle root = q.getRoot().getKey("/StructTreeRoot");
-      if (root.isDictionary()) set_figure_alts(root.getKey("/K"), figure_alts, next, 0);
+    std::rewind(cairo_pdf);
+    q.processFile("forme output", cairo_pdf, false);
+    Changed changed;
+    QPDFObjectHandle info = q.getTrailer().getKey("/Info");
+    if (!info.isDictionary()) {
+      info = q.makeIndirectObject(QPDFObjectHandle::newDictionary());
+      q.getTrailer().replaceKey("/Info", info);
     }
-    if (!labels.empty()) label(q, labels);
-    QPDFWriter w(q);
-    w.setOutputMemory();
-    w.setDeterministicID(true);       // /ID from the content, not the time
-    w.setDecodeLevel(qpdf_dl_none);   // keep Cairo's streams as they are
-    w.setCompressStreams(true);       // and compress the new ones
-    w.write();
-    auto buffer = w.getBufferSharedPointer();
-    return std::string(reinterpret_cast<const char*>(buffer->getBuffer()), buffer->getSize());
+    info.replaceKey("/CreationDate", QPDFObjectHandle::newString(date));
+    mark(changed, info);
+    if (!files.empty()) embed(q, files, changed);
+    link(q, pages, changed);
+    set_boxes(q, pages, changed);
+    std::map<QPDFObjGen, std::string> rewritten;
+    if (!figure_alts.empty()) rewritten = figures_with_alts(q, cairo_pdf, figure_alts);
+    if (!labels.empty()) label(q, labels, changed);
+    write_incremental_update(q, cairo_pdf, changed, rewritten, out);
   } catch (const std::exception& e) {
-    throw std::runtime_error(std::string("PDF attachments and links: ") + e.what());
+    throw std::runtime_error(std::string("PDF date, attachments and links: ") + e.what());
   }
 }
 

@@ -1,9 +1,13 @@
 #pragma once
-/// What a finished PDF gets after Cairo: embedded files and link annotations.
+/// What a finished PDF gets after Cairo: its date, embedded files, link
+/// annotations, print boxes, figure alternate text and page labels.
 ///
 /// Cairo 1.16 cannot embed files, and its link tags are only sound inside a
 /// tagged structure forme does not write, so both are added to the finished
-/// bytes with the qpdf library:
+/// bytes with the qpdf library, as is everything else Cairo cannot say:
+///  - the document's /CreationDate (ISO 32000-1 §7.9.4): Cairo 1.16 writes
+///    a date passed to it without the `D:` prefix the standard requires,
+///    drops one it cannot parse, and otherwise dates the file by the clock;
 ///  - each file becomes an embedded file stream (ISO 32000-1 §7.11.4) with
 ///    its size and MD5 checksum in /Params, referred to by a file
 ///    specification (§7.11.3) listed in the catalog's /Names /EmbeddedFiles
@@ -16,7 +20,9 @@
 ///  - page labels become the catalog's /PageLabels number tree (§12.4.2).
 /// The file is rewritten whole, with no dates and a document /ID computed
 /// from its content, so the same page still gives the same bytes.
+#include <cstdio>
 #include <optional>
+#include <ostream>
 #include <string>
 #include <vector>
 
@@ -33,14 +39,17 @@ struct PageLinks {
   std::optional<Rect> trim_box, bleed_box;  ///< written as /TrimBox and /BleedBox (ISO 32000-1 §14.11.2)
 };
 
-/// Returns `pdf` with `files` embedded, `pages[i]`'s links on page i, and
+/// Reads the PDF Cairo wrote to `cairo_pdf` (read from its start, left
+/// open) and writes it to `out` dated `date` (a PDF date string such as
+/// `D:20240229120000Z`), with `files` embedded, `pages[i]`'s links on page i, and
 /// `figure_alts[k]` as the alternate text (/Alt, ISO 32000-1 §14.9.3) of
 /// the k-th /Figure structure element in document order (Cairo 1.16
-/// writes structure tags without attributes). Returns it unchanged when
-/// there is nothing to add. Throws std::runtime_error if qpdf cannot read
-/// or write the file.
-std::string add_pdf_extras(const std::string& pdf, const std::vector<EmbeddedFile>& files,
-                           const std::vector<PageLinks>& pages, const std::vector<std::string>& figure_alts = {},
-                           const std::vector<PageLabelRange>& labels = {});
+/// writes structure tags without attributes). qpdf reads objects from the
+/// file as it needs them and writes straight to `out`, so a long report is
+/// never held in memory whole. Throws std::runtime_error if qpdf cannot
+/// read or write the file.
+void write_pdf_with_extras(std::FILE* cairo_pdf, const std::string& date, const std::vector<EmbeddedFile>& files,
+                           const std::vector<PageLinks>& pages, const std::vector<std::string>& figure_alts,
+                           const std::vector<PageLabelRange>& labels, std::ostream& out);
 
 }  // namespace forme

@@ -1,15 +1,14 @@
 // PDF output: vector pages, fonts embedded as subsets by Cairo.
 #include <cairo-pdf.h>
 
+#include <cstdio>
 #include <ctime>
 #include <stdexcept>
-#include <sstream>
 #include <string_view>
 
 #include "paint/cairo_stream.h"
 #include "paint/draw_cairo.h"
 #include "paint/painter.h"
-#include "paint/pdf_creation_date.h"
 #include "paint/pdf_dates.h"
 #include "paint/pdf_extras.h"
 
@@ -19,21 +18,36 @@ namespace {
 
 class PdfPainter final : public Painter {
  public:
-  PdfPainter(std::ostream& out, const PaintOptions& options) : out_(out), options_(options) {}
+  PdfPainter(std::ostream& out, const PaintOptions& options)
+      : out_(out),
+        options_(options),
+        date_(pdf_date_utc(options.info.creation_time.value_or(static_cast<std::int64_t>(std::time(nullptr))))) {}
   ~PdfPainter() override {
     if (cr_) cairo_destroy(cr_);
     if (surface_) cairo_surface_destroy(surface_);
+    if (spool_) std::fclose(spool_);
   }
 
   void paint(const DisplayPage& page) override {
     if (!surface_) {
-      surface_ = cairo_pdf_surface_create_for_stream(write_to_ostream, &buffer_, page.width, page.height);
+      // Cairo's file waits on disk for the finishing pass, not in memory:
+      // a report of hundreds of pages costs no more memory than one page.
+      spool_ = std::tmpfile();
+      if (!spool_) throw std::runtime_error("PDF file: cannot create a temporary file (is TMPDIR writable?)");
+      surface_ = cairo_pdf_surface_create_for_stream(write_to_file, spool_, page.width, page.height);
       check_cairo(cairo_surface_status(surface_), "PDF surface");
       cairo_pdf_surface_restrict_to_version(surface_, CAIRO_PDF_VERSION_1_5);
       const std::string& title = options_.info.title.empty() ? page.title : options_.info.title;
       if (!title.empty()) cairo_pdf_surface_set_metadata(surface_, CAIRO_PDF_METADATA_TITLE, title.c_str());
       cairo_pdf_surface_set_metadata(surface_, CAIRO_PDF_METADATA_CREATOR, options_.info.creator.c_str());
       set_document_information();
+      // Cairo writes this date in a form ISO 32000-1 §7.9.4 does not allow
+      // (no `D:`); finish() supersedes it with a conforming one. Given here,
+      // Cairo's copy is the same instant rather than the clock's, so the
+      // bytes stay reproducible. "D:YYYYMMDDHHmmSSZ" -> "YYYY-MM-DDTHH:mm:SSZ".
+      const std::string iso = date_.substr(2, 4) + "-" + date_.substr(6, 2) + "-" + date_.substr(8, 2) + "T" +
+                              date_.substr(10, 2) + ":" + date_.substr(12, 2) + ":" + date_.substr(14, 2) + "Z";
+      cairo_pdf_surface_set_metadata(surface_, CAIRO_PDF_METADATA_CREATE_DATE, iso.c_str());
       cr_ = cairo_create(surface_);
       // One structure tree for the whole file (ISO 32000-1 §14.8): the
       // chart and any table pages are one document.
@@ -57,13 +71,9 @@ class PdfPainter final : public Painter {
     check_cairo(cairo_surface_status(surface_), "PDF file");
     cairo_surface_destroy(surface_);
     surface_ = nullptr;
-    // Cairo's own date is the time of painting and cannot be set in the
-    // form ISO 32000-1 §7.9.4 asks for, so the date is written afterwards.
-    const std::int64_t when = options_.info.creation_time.value_or(static_cast<std::int64_t>(std::time(nullptr)));
-    std::string bytes = set_pdf_creation_date(std::move(buffer_).str(), pdf_date_utc(when));
-    // Attachments and links go in last: the date rewrite reads Cairo's own layout.
-    bytes = add_pdf_extras(bytes, options_.info.attachments, links_, alts_, options_.info.page_labels);
-    out_.write(bytes.data(), static_cast<std::streamsize>(bytes.size()));
+    if (std::fflush(spool_) != 0 || std::ferror(spool_)) throw std::runtime_error("PDF file: temporary file write failed");
+    write_pdf_with_extras(spool_, date_, options_.info.attachments, links_, alts_,
+                          options_.info.page_labels, out_);
     if (!out_) throw std::runtime_error("PDF file: write failed");
   }
 
@@ -128,8 +138,9 @@ class PdfPainter final : public Painter {
   std::ostream& out_;
   std::vector<PageLinks> links_;  ///< each painted page's links, in page order
   std::vector<std::string> alts_;  ///< each figure's alternate text, in document order
-  std::ostringstream buffer_;  ///< Cairo's output, finished before it reaches out_
+  std::FILE* spool_ = nullptr;  ///< Cairo's output, finished before it reaches out_
   PaintOptions options_;
+  std::string date_;  ///< the document's creation date, "D:YYYYMMDDHHmmSSZ"
   cairo_surface_t* surface_ = nullptr;
   cairo_t* cr_ = nullptr;
 };

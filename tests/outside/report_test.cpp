@@ -186,6 +186,27 @@ TEST_CASE("a report rendered twice with SOURCE_DATE_EPOCH is byte-identical", "[
   CHECK(info.out.find("Feb 29 12:00:00 2024") != std::string::npos);
 }
 
+TEST_CASE("a report's additions are one incremental update after Cairo's file, which qpdf reads whole", "[outside][report]") {
+  TempDir dir;
+  const std::string bytes = read_file(render_report(dir, "r.pdf", "SOURCE_DATE_EPOCH=1709208000"));
+  // ISO 32000-1 §7.5.6: the update's trailer has /Prev, the byte offset of
+  // the previous cross-reference section, which starts with "xref" (§7.5.4).
+  const std::size_t trailer = bytes.rfind("trailer");
+  REQUIRE(trailer != std::string::npos);
+  const std::size_t prev = bytes.find("/Prev ", trailer);
+  REQUIRE(prev != std::string::npos);
+  const std::size_t offset = std::stoul(bytes.substr(prev + 6, 20));
+  REQUIRE(offset < trailer);
+  CHECK(bytes.compare(offset, 4, "xref") == 0);
+  CHECK(bytes.find("%%EOF", offset) < trailer);  // Cairo's own file ends before the update
+  // qpdf follows both sections; pdfinfo reads the date the update sets.
+  auto check = run("qpdf --check '" + dir.file("r.pdf") + "'");
+  INFO(check.out << check.err);
+  CHECK(check.exit_code == 0);
+  auto info = run("TZ=UTC pdfinfo '" + dir.file("r.pdf") + "'");
+  CHECK(info.out.find("Feb 29 12:00:00 2024") != std::string::npos);
+}
+
 TEST_CASE("every report under layouts renders with no two lines of text overlapping on any page", "[outside][report]") {
   const auto reports = layout_reports();
   REQUIRE(!reports.empty());

@@ -61,7 +61,9 @@ TEST_CASE("without a stated date the PDF is dated at the time of painting", "[pa
   const std::int64_t before = std::time(nullptr);
   const std::string pdf = paint(page, forme::OutputFormat::pdf, std::nullopt);
   const std::int64_t after = std::time(nullptr);
-  const std::size_t at = pdf.find("/CreationDate (");
+  // The last revision's date is the one in force (ISO 32000-1 §7.5.6:
+  // an incremental update supersedes the objects it rewrites).
+  const std::size_t at = pdf.rfind("/CreationDate (");
   REQUIRE(at != std::string::npos);
   const std::string date = pdf.substr(at + 15, 17);
   // The string sorts like the instant it names, so the painted date lies
