@@ -129,8 +129,8 @@ int main(int argc, char** argv) {
   bool strict = false;
   bool check_greyscale = false;
   auto* check_cmd = app.add_subcommand(
-      "check", "Read a page, resolve its data and scales without painting, and list what could mislead.");
-  check_cmd->add_option("page", check_page, "page description (YAML)")->required();
+      "check", "Read a page or report, resolve its data and scales without painting, and list what could mislead.");
+  check_cmd->add_option("page", check_page, "page or report description (YAML)")->required();
   check_cmd->add_flag("--strict", strict, "treat warnings as failures (exit 1)");
   check_cmd->add_flag("--greyscale", check_greyscale, "check the page as painted in grey for black-and-white printing");
 
@@ -145,7 +145,8 @@ int main(int argc, char** argv) {
       },
       "NAME=N");
   for (auto* sub : {render_cmd, check_cmd})
-    sub->add_option("--limit", limit_settings, limit_help)->check(valid_limit)->take_all();
+    // One NAME=N per --limit, so the page after it is not read as another.
+    sub->add_option("--limit", limit_settings, limit_help)->check(valid_limit)->allow_extra_args(false);
 
   std::string fg, bg;
   auto* contrast_cmd = app.add_subcommand("contrast", "Print the WCAG 2.x contrast ratio of two colours.");

@@ -233,7 +233,10 @@ RenderResult check_file(const std::string& page_path, const std::string& font_di
                         bool greyscale) {
   RenderResult r;
   DiagnosticSink sink;
-  r.ok = collect(sink, page_path, [&] { compose_page(page_path, font_dir, sink, limits, greyscale); });
+  r.ok = collect(sink, page_path, [&] {
+    if (is_report_description(page_path)) check_report(page_path, sink, limits, font_dir, greyscale);
+    else compose_page(page_path, font_dir, sink, limits, greyscale);
+  });
   r.diagnostics = sink.items();
   return r;
 }

@@ -77,6 +77,30 @@ std::vector<PageLabelRange> page_labels(std::size_t front_pages) {
 
 }  // namespace
 
+void check_report(const std::string& path, DiagnosticSink& sink, const Limits& limits, const std::string& font_dir,
+                  bool greyscale) {
+  std::vector<Diagnostic> errors;
+  std::optional<ReportSpec> report = read_report(path, errors, limits);
+  if (!report) {
+    for (auto& e : errors) sink.report(e);
+    throw InputError(errors.front());
+  }
+  TableCache cache([&](const TableSource& s) { return load_table(s, limits); });
+  std::vector<PlannedPage> plan = plan_report(*report, cache, limits);
+  const FontSet fonts = open_bundled_fonts(font_dir);
+  for (auto& page : plan) {
+    DiagnosticSink found;
+    std::vector<Table> tables = take_tables(page, cache);
+    try {
+      compose_spec(page.spec, tables, fonts, found, limits, nullptr, greyscale);
+    } catch (...) {
+      merge(sink, found);  // the findings before the error, then the error itself
+      throw;
+    }
+    merge(sink, found);
+  }
+}
+
 std::string render_report_to_bytes(const std::string& path, DiagnosticSink& sink, const ReportRunOptions& o) {
   std::ostringstream out;
   render_report(path, sink, o, out);

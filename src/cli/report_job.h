@@ -1,7 +1,7 @@
 #pragma once
 /// The report driver: a report description → one PDF of many pages. It
 /// plans every page (report/), numbers them, sets the contents, then
-/// composes page k+1 on a second thread while page k is painted, adding the
+/// composes later pages on a second thread while earlier ones are painted, adding the
 /// running head and foot, bookmarks and page labels. The pages are painted
 /// in order whatever the threads do, so the file is the same byte for byte.
 #include <cstddef>
@@ -38,6 +38,12 @@ struct ReportRunOptions {
 /// finished. Warnings go to `sink`; throws InputError for the first error
 /// (already in `sink` when found by a stage that collects).
 void render_report(const std::string& path, DiagnosticSink& sink, const ReportRunOptions& options, std::ostream& out);
+
+/// Reads the report and composes every page without painting, so that each
+/// page's findings land in `sink` (each repeated finding once): what
+/// `forme check` does for a report. Throws InputError for the first error.
+void check_report(const std::string& path, DiagnosticSink& sink, const Limits& limits, const std::string& font_dir,
+                  bool greyscale);
 
 /// As render_report, into memory (tests, benchmarks).
 std::string render_report_to_bytes(const std::string& path, DiagnosticSink& sink, const ReportRunOptions& options);

@@ -47,6 +47,33 @@ TEST_CASE("the strict flag turns warnings into a failing exit code, and render p
   CHECK(render.err.find("page.yaml:1:1: warning: the page has no source line") != std::string::npos);
 }
 
+TEST_CASE("forme check reads a report, composes each page and reports a repeated page's finding once, located", "[outside][check][report]") {
+  TempDir dir;
+  write_file(dir.file("sites.csv"), "site,week,litres\nAsh,1,4\nAsh,2,5\nBirch,1,6\nBirch,2,7\n");
+  // No unit on the value axis: a warning on every repeated page.
+  write_file(dir.file("page.yaml"),
+             "tables: {sites: sites.csv}\n"
+             "heading: {title: Litres at $(site)}\n"
+             "panel: {kind: line, table: sites, x: week, y: litres}\n"
+             "source: \"Source: invented for this test\"\n");
+  write_file(dir.file("report.yaml"),
+             "title: Sites\ncontents: false\nsections:\n"
+             "  - title: Sites\n    pages:\n      - page: page.yaml\n        one-page-per: {table: sites, column: site}\n");
+  auto lax = run("cd " + dir.path() + " && " + FORME_BINARY + " check report.yaml");
+  INFO(lax.err);
+  CHECK(lax.exit_code == 0);
+  const std::string warning = "page.yaml:3:8: warning: the value axis has no unit";
+  const std::size_t first = lax.err.find(warning);
+  CHECK(first != std::string::npos);
+  CHECK(lax.err.find(warning, first + 1) == std::string::npos);  // two pages, one finding
+  auto strict = run("cd " + dir.path() + " && " + FORME_BINARY + " check --strict report.yaml");
+  CHECK(strict.exit_code == 1);
+  // --limit takes one NAME=N: the description after it is still read as the page.
+  auto limited = run("cd " + dir.path() + " && " + FORME_BINARY + " check --limit pages=10 report.yaml");
+  INFO(limited.err);
+  CHECK(limited.exit_code == 0);
+}
+
 TEST_CASE("forme contrast prints the WCAG ratio: #767676 on white passes 4.5:1, #777777 fails", "[outside][colour]") {
   // Worked values from check-values.md §2c: 4.542225 and 4.478089.
   auto pass = run_forme("contrast '#767676' '#ffffff'");
