@@ -7,10 +7,8 @@
 #include <cmath>
 #include <map>
 
-#include "colour/text_ink.h"
 #include "layout/marks/marks.h"
-#include "layout/text_items.h"
-#include "place/spread.h"
+#include "layout/marks/stack_names.h"
 
 namespace forme {
 
@@ -50,27 +48,7 @@ void draw_stacked_area_marks(const MarkContext& ctx, DisplayPage& page) {
     name_y.push_back((upper.back().y + lower.back().y) / 2);
   }
   if (series.size() < 2 || !ctx.label_series) return;
-  const double lh = PageStyle::line_height(st.fonts.regular, st.label_size());
-  std::vector<double> desired, heights;
-  std::vector<std::size_t> which;
-  for (std::size_t k = 0; k < series.size(); ++k)
-    if (!std::isnan(name_y[k])) desired.push_back(name_y[k]), heights.push_back(lh), which.push_back(k);
-  SpreadOptions opt;
-  opt.gap = st.base * 0.15;
-  opt.lo = f.plot.top() - st.base * 0.5;
-  opt.hi = f.plot.bottom() + st.base * 0.5;
-  const SpreadResult placed = spread_labels(desired, heights, opt);
-  const double x0 = f.plot.right() + st.base * 0.3;
-  const double label_x = f.plot.right() + st.base * 0.9;
-  for (std::size_t j = 0; j < which.size(); ++j) {
-    const Rgb colour = ctx.colours.at(series[which[j]].name);
-    PathItem leader;
-    leader.points = {{x0, desired[j]}, {label_x - st.base * 0.2, placed.centres[j]}};
-    leader.stroke = Stroke{colour, st.rule_width() * 1.5, {}, true};
-    page.add(std::move(leader));
-    page.add(text_mid(shape_text(series[which[j]].name, st.fonts.regular, st.label_size()), label_x, placed.centres[j],
-                      Align::left, text_ink(colour, st.ink.paper), TextRole::series_label));
-  }
+  name_stacked_series(ctx, page, name_y, f.plot.right() + st.base * 0.3, f.plot.right() + st.base * 0.9, true);
 }
 
 }  // namespace forme

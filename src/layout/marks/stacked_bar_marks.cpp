@@ -11,9 +11,9 @@
 #include "colour/contrast.h"
 #include "colour/text_ink.h"
 #include "layout/marks/marks.h"
+#include "layout/marks/stack_names.h"
 #include "layout/marks/value_labels.h"
 #include "layout/text_items.h"
-#include "place/spread.h"
 
 namespace forme {
 
@@ -85,29 +85,8 @@ void draw_stacked_bar_marks(const MarkContext& ctx, DisplayPage& page) {
   }
   if (series.size() < 2 || !ctx.label_series) return;
   // Names beside the last bar, centred on their segments where there is room.
-  std::vector<double> desired, heights;
-  std::vector<std::size_t> which;
-  for (std::size_t k = 0; k < series.size(); ++k)
-    if (!std::isnan(name_y[k])) desired.push_back(name_y[k]), heights.push_back(lh), which.push_back(k);
-  if (which.empty()) return;
-  SpreadOptions opt;
-  opt.gap = st.base * 0.15;
-  opt.lo = f.plot.top() - st.base * 0.5;
-  opt.hi = f.plot.bottom() + st.base * 0.5;
-  SpreadResult placed = spread_labels(desired, heights, opt);
   const double x0 = f.px(last_x) + band / 2 + st.base * 0.3;
-  const double label_x = std::max(f.plot.right(), x0) + st.base * 0.6;
-  for (std::size_t j = 0; j < which.size(); ++j) {
-    const Rgb colour = ctx.colours.at(series[which[j]].name);
-    if (std::abs(placed.centres[j] - desired[j]) > st.base * 0.25 || label_x - x0 > st.base * 0.5) {
-      PathItem leader;
-      leader.points = {{x0, desired[j]}, {label_x - st.base * 0.2, placed.centres[j]}};
-      leader.stroke = Stroke{colour, st.rule_width() * 1.5, {}, true};
-      page.add(std::move(leader));
-    }
-    page.add(text_mid(shape_text(series[which[j]].name, st.fonts.regular, st.label_size()), label_x, placed.centres[j],
-                      Align::left, text_ink(colour, st.ink.paper), TextRole::series_label));
-  }
+  name_stacked_series(ctx, page, name_y, x0, std::max(f.plot.right(), x0) + st.base * 0.6, false);
 }
 
 }  // namespace forme
