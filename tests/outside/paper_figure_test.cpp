@@ -32,12 +32,8 @@ std::string page_yaml(const std::string& sheet) {
 }
 
 std::pair<double, double> media_box(const std::string& pdf) {
-  auto r = run("pdfinfo -box '" + pdf + "'");
-  REQUIRE(r.exit_code == 0);
-  std::smatch m;
-  static const std::regex re(R"re(MediaBox:\s+([-0-9.]+)\s+([-0-9.]+)\s+([-0-9.]+)\s+([-0-9.]+))re");
-  REQUIRE(std::regex_search(r.out, m, re));
-  return {std::stod(m[3]) - std::stod(m[1]), std::stod(m[4]) - std::stod(m[2])};
+  const PdfBox box = pdfinfo_boxes(pdf).at("MediaBox");
+  return {box.width(), box.height()};
 }
 
 std::pair<long, long> png_size(const std::string& path) {

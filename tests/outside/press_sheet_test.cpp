@@ -35,22 +35,7 @@ std::string page_yaml(const std::string& press) {
          "source: \"Source: invented for this test\"\n";
 }
 
-struct Box {
-  double x0 = 0, y0 = 0, x1 = 0, y1 = 0;
-};
-
-// Every box pdfinfo -box prints for page 1, by name.
-std::map<std::string, Box> pdfinfo_boxes(const std::string& pdf) {
-  auto r = run("pdfinfo -box '" + pdf + "'");
-  REQUIRE(r.exit_code == 0);
-  std::map<std::string, Box> out;
-  static const std::regex re(R"re((\w+Box):\s+([-0-9.]+)\s+([-0-9.]+)\s+([-0-9.]+)\s+([-0-9.]+))re");
-  for (std::sregex_iterator it(r.out.begin(), r.out.end(), re), end; it != end; ++it)
-    out[(*it)[1]] = {std::stod((*it)[2]), std::stod((*it)[3]), std::stod((*it)[4]), std::stod((*it)[5])};
-  return out;
-}
-
-void check_box(const Box& b, double x0, double y0, double x1, double y1) {
+void check_box(const PdfBox& b, double x0, double y0, double x1, double y1) {
   CHECK(b.x0 == Approx(x0).margin(0.01));
   CHECK(b.y0 == Approx(y0).margin(0.01));
   CHECK(b.x1 == Approx(x1).margin(0.01));

@@ -5,7 +5,6 @@
 // ../shared/refs/check-values.md §6 (mm: V2).
 #include <catch2/catch.hpp>
 
-#include <regex>
 
 #include "support/outside_tools.h"
 
@@ -25,14 +24,9 @@ struct Box {
   double w = 0, h = 0;
 };
 
-// MediaBox as printed by poppler's pdfinfo (two decimals).
 Box pdfinfo_mediabox(const std::string& pdf) {
-  auto r = run("pdfinfo -box '" + pdf + "'");
-  REQUIRE(r.exit_code == 0);
-  std::smatch m;
-  static const std::regex re(R"re(MediaBox:\s+([-0-9.]+)\s+([-0-9.]+)\s+([-0-9.]+)\s+([-0-9.]+))re");
-  REQUIRE(std::regex_search(r.out, m, re));
-  return {std::stod(m[3]) - std::stod(m[1]), std::stod(m[4]) - std::stod(m[2])};
+  const PdfBox box = pdfinfo_boxes(pdf).at("MediaBox");
+  return {box.width(), box.height()};
 }
 
 }  // namespace

@@ -110,6 +110,16 @@ std::vector<PdfPageWords> pdf_words(const std::string& pdf) {
   return parse_bbox(r.out, "word");
 }
 
+std::map<std::string, PdfBox> pdfinfo_boxes(const std::string& pdf) {
+  auto r = run("pdfinfo -box '" + pdf + "'");
+  if (r.exit_code != 0) throw std::runtime_error("pdfinfo failed: " + r.err);
+  std::map<std::string, PdfBox> out;
+  static const std::regex re(R"re((\w+Box):\s+([-0-9.]+)\s+([-0-9.]+)\s+([-0-9.]+)\s+([-0-9.]+))re");
+  for (std::sregex_iterator it(r.out.begin(), r.out.end(), re), end; it != end; ++it)
+    out[(*it)[1]] = {std::stod((*it)[2]), std::stod((*it)[3]), std::stod((*it)[4]), std::stod((*it)[5])};
+  return out;
+}
+
 std::vector<PdfPageWords> pdf_layout_words(const std::string& pdf) {
   auto r = run("pdftotext -bbox-layout '" + pdf + "' -");
   if (r.exit_code != 0) throw std::runtime_error("pdftotext failed: " + r.err);

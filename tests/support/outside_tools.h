@@ -1,6 +1,7 @@
 #pragma once
 /// Helpers for tests that ask independent tools (poppler, qpdf, fontTools)
 /// about files forme wrote.
+#include <map>
 #include <string>
 #include <vector>
 
@@ -58,6 +59,17 @@ std::vector<PdfPageWords> pdf_lines(const std::string& pdf);
 /// Words of every page, via `pdftotext -bbox-layout` (each word's box, as
 /// laid out into lines and blocks).
 std::vector<PdfPageWords> pdf_layout_words(const std::string& pdf);
+
+/// A page box as poppler's `pdfinfo -box` prints it: points, two decimals.
+struct PdfBox {
+  double x0 = 0, y0 = 0, x1 = 0, y1 = 0;
+  double width() const { return x1 - x0; }
+  double height() const { return y1 - y0; }
+};
+
+/// Every box `pdfinfo -box` prints for page 1, by name ("MediaBox",
+/// "TrimBox", …). Throws if pdfinfo fails.
+std::map<std::string, PdfBox> pdfinfo_boxes(const std::string& pdf);
 
 /// Every page description under layouts/ (not reports, nor the pages a
 /// report repeats, which hold placeholders).
