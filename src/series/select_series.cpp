@@ -135,16 +135,29 @@ PanelData build_panel(const PanelSpec& p, const Table& t, const std::vector<std:
     if (fresh) d.categories.push_back(name);
     return static_cast<double>(it->second);
   };
+  // Rows of one series usually come together: the last series found is
+  // tried first, so a million-row table does not search the map per row.
+  const std::string no_name;
+  const std::string* last_name = nullptr;
+  std::size_t last_series = 0;
+  d.rows.reserve(rows.size());
   for (std::size_t r : rows) {
-    std::string sname = sc ? sc->text[r] : std::string();
-    auto [it, fresh] = series_index.emplace(sname, d.series.size());
-    if (fresh) d.series.push_back(Series{sname, {}, {}});
-    Series& s = d.series[it->second];
+    const std::string& sname = sc ? sc->text[r] : no_name;
+    if (!last_name || *last_name != sname) {
+      auto it = series_index.find(sname);
+      if (it == series_index.end()) {
+        it = series_index.emplace(sname, d.series.size()).first;
+        d.series.push_back(Series{sname, {}, {}});
+      }
+      last_name = &sname;
+      last_series = it->second;
+    }
+    Series& s = d.series[last_series];
     double x = d.x_kind == AxisKind::category ? category(xc.text[r]) : xc.values[r];
     double y = d.y_kind == AxisKind::category ? category(yc.text[r]) : yc.values[r];
     if (std::isnan(x) || std::isnan(y)) continue;  // missing cell: a gap, not a zero
     if (names && !names->text[r].empty())
-      d.point_names.push_back({it->second, s.x.size(), names->text[r], ranks ? ranks->values[r] : 0,
+      d.point_names.push_back({last_series, s.x.size(), names->text[r], ranks ? ranks->values[r] : 0,
                                SourceLoc{t.path, r < t.row_lines.size() ? t.row_lines[r] : 0, 1}});
     s.x.push_back(x);
     s.y.push_back(y);
@@ -155,6 +168,7 @@ PanelData build_panel(const PanelSpec& p, const Table& t, const std::vector<std:
   // categories, their order of first appearance: an ordinal scale).
   if (p.kind == ChartKind::line || p.kind == ChartKind::stacked_area)
     for (auto& s : d.series) {
+      if (std::is_sorted(s.x.begin(), s.x.end())) continue;  // the usual case: rows in time order
       std::vector<std::size_t> idx(s.x.size());
       for (std::size_t i = 0; i < idx.size(); ++i) idx[i] = i;
       std::stable_sort(idx.begin(), idx.end(), [&](auto a, auto b) { return s.x[a] < s.x[b]; });
