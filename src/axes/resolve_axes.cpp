@@ -95,7 +95,7 @@ void finish_number_format(Axis& a, const std::optional<NumberFormat>& fmt, int t
 // its power of ten, and the ticks scaled back up; ticks beyond the largest
 // double are dropped, so the axis then ends at the data.
 Ticks ticks_within_doubles(Extent e) {
-  const double magnitude = std::max(std::abs(e.lo), std::abs(e.hi));
+  const double magnitude = std::min(std::max(std::abs(e.lo), std::abs(e.hi)), std::numeric_limits<double>::max());
   if (magnitude < 1e300 && std::isfinite(e.hi - e.lo)) return extended_ticks(e.lo, e.hi, kWantedTicks, false);
   const int power = static_cast<int>(std::floor(std::log10(magnitude)));
   Ticks t = extended_ticks(times_power_of_ten(e.lo, -power), times_power_of_ten(e.hi, -power), kWantedTicks, false);
@@ -115,8 +115,10 @@ Axis number_axis(Extent e, bool from_zero, const AxisSpec& spec) {
   }
   if (e.hi - e.lo <= 0) {
     // One value (or all equal): give the axis room around it.
-    double pad = e.lo == 0 ? 1 : std::abs(e.lo) * 0.1;
-    e = {from_zero && e.lo >= 0 ? 0 : e.lo - pad, e.hi + pad};
+    // Held within the doubles: a lone -1.7e308 padded by a tenth would be -inf.
+    const double pad = e.lo == 0 ? 1 : std::abs(e.lo) * 0.1;
+    const double most = std::numeric_limits<double>::max();
+    e = {from_zero && e.lo >= 0 ? 0 : std::max(e.lo - pad, -most), std::min(e.hi + pad, most)};
   }
   Ticks t = ticks_within_doubles(e);
   std::optional<NumberFormat> format = spec.format;
