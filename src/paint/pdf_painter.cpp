@@ -1,11 +1,17 @@
 // PDF output: vector pages, fonts embedded as subsets by Cairo.
 #include <cairo-pdf.h>
+#include <unistd.h>
 
+#include <cerrno>
 #include <cstdio>
+#include <cstdlib>
+#include <cstring>
 #include <ctime>
 #include <stdexcept>
+#include <string>
 #include <string_view>
 
+#include "base/diagnostic.h"
 #include "paint/cairo_stream.h"
 #include "paint/draw_cairo.h"
 #include "paint/painter.h"
@@ -15,6 +21,25 @@
 namespace forme {
 
 namespace {
+
+// A temporary file in $TMPDIR (else /tmp) that has no name: removed from
+// the folder at once, it goes away when closed, even if forme is killed.
+std::FILE* anonymous_temp_file() {
+  const char* env = std::getenv("TMPDIR");
+  const std::string dir = env && *env ? env : "/tmp";
+  std::string path = dir + "/forme-pdf-XXXXXX";
+  const int fd = ::mkstemp(path.data());
+  if (fd < 0)
+    throw InputError(SourceLoc{dir}, std::string("cannot create a temporary file for the PDF: ") + std::strerror(errno),
+                     "set TMPDIR to a writable folder");
+  ::unlink(path.c_str());
+  std::FILE* f = ::fdopen(fd, "w+b");
+  if (!f) {
+    ::close(fd);
+    throw std::runtime_error("PDF file: cannot open a temporary file");
+  }
+  return f;
+}
 
 class PdfPainter final : public Painter {
  public:
@@ -30,10 +55,9 @@ class PdfPainter final : public Painter {
 
   void paint(const DisplayPage& page) override {
     if (!surface_) {
-      // Cairo's file waits on disk for the finishing pass, not in memory:
-      // a report of hundreds of pages costs no more memory than one page.
-      spool_ = std::tmpfile();
-      if (!spool_) throw std::runtime_error("PDF file: cannot create a temporary file (is TMPDIR writable?)");
+      // Cairo's file waits on disk for the finishing pass, not in memory,
+      // so a long report does not hold its whole file twice.
+      spool_ = anonymous_temp_file();
       surface_ = cairo_pdf_surface_create_for_stream(write_to_file, spool_, page.width, page.height);
       check_cairo(cairo_surface_status(surface_), "PDF surface");
       cairo_pdf_surface_restrict_to_version(surface_, CAIRO_PDF_VERSION_1_5);

@@ -207,6 +207,16 @@ TEST_CASE("a report's additions are one incremental update after Cairo's file, w
   CHECK(info.out.find("Feb 29 12:00:00 2024") != std::string::npos);
 }
 
+TEST_CASE("an unwritable TMPDIR is a located error that leaves the earlier PDF as it was", "[outside][report][errors]") {
+  TempDir dir;
+  const std::string out = dir.file("r.pdf");
+  write_file(out, "earlier");
+  auto r = run("TMPDIR=" + dir.file("missing") + " " + FORME_BINARY + " render -q '" + kReport + "' -o '" + out + "'");
+  CHECK(r.exit_code == 1);
+  CHECK(r.err.find(dir.file("missing") + ": error: cannot create a temporary file for the PDF") == 0);
+  CHECK(read_file(out) == "earlier");
+}
+
 TEST_CASE("every report under layouts renders with no two lines of text overlapping on any page", "[outside][report]") {
   const auto reports = layout_reports();
   REQUIRE(!reports.empty());
