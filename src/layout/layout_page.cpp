@@ -94,11 +94,7 @@ GridMeasure measure_grid(const std::vector<PanelData>& panels, const std::vector
 
 // A stretch of x a callout points at: a pale band the height of the plot.
 void draw_callout_band(const Rect& band, DisplayPage& page) {
-  PathItem p;
-  p.points = {{band.x, band.y}, {band.right(), band.y}, {band.right(), band.bottom()}, {band.x, band.bottom()}};
-  p.closed = true;
-  p.fill = rgb8(0xf3, 0xec, 0xd9);  // a warm pale sand, lighter than any series colour
-  page.add(std::move(p));
+  page.add(filled_rect(band, rgb8(0xf3, 0xec, 0xd9)));  // a warm pale sand, lighter than any series colour
 }
 
 }  // namespace

@@ -112,13 +112,7 @@ void place_callouts(const PanelMovables& p, const PageStyle& st, DisplayPage& pa
     // Paper behind the note keeps it readable where it must cover data.
     const bool covers = std::any_of(page.data_marks.begin(), page.data_marks.end(),
                                     [&](const Rect& m) { return m.overlaps(box); });
-    if (covers) {
-      PathItem backing;
-      backing.points = {{box.x, box.y}, {box.right(), box.y}, {box.right(), box.bottom()}, {box.x, box.bottom()}};
-      backing.closed = true;
-      backing.fill = st.ink.paper;
-      page.add(std::move(backing));
-    }
+    if (covers) page.add(filled_rect(box, st.ink.paper));
     const Point end = nearest_point_of(box.inset(pad * 0.5), req.target);
     if (std::hypot(end.x - req.target.x, end.y - req.target.y) > st.base * 0.3) {
       draw_leader(req.target, end, Stroke{st.ink.text, st.rule_width() * 1.5, {}, true}, page);

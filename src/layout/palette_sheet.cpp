@@ -10,14 +10,6 @@ namespace forme {
 
 namespace {
 
-PathItem swatch(double x, double y, double w, double h, Rgb fill) {
-  PathItem p;
-  p.points = {{x, y}, {x + w, y}, {x + w, y + h}, {x, y + h}};
-  p.closed = true;
-  p.fill = fill;
-  return p;
-}
-
 const char* kind_name(PaletteKind k) {
   return k == PaletteKind::categorical ? "categorical: series colours, any two compared"
          : k == PaletteKind::sequential ? "sequential: light to dark, neighbouring classes compared"
@@ -60,7 +52,7 @@ DisplayPage palette_sheet(const PageStyle& st) {
                         Align::left, st.ink.text, TextRole::tick_label));
       double x = margin + label_w;
       for (const Rgb& c : p.colours) {
-        page.add(swatch(x, y, sw, sh, as_seen(c, v.vision)));
+        page.add(filled_rect({x, y, sw, sh}, as_seen(c, v.vision)));
         x += sw + 2;
       }
       std::string verdict = "closest " + v.scope + ": " + fixed(v.min_delta_e, 1) + " ΔE00";

@@ -35,14 +35,6 @@ void shift(DisplayPage& page, double d) {
   for (auto& l : page.links) l.area.x += d, l.area.y += d;
 }
 
-PathItem rectangle(const Rect& r, Rgb fill) {
-  PathItem p;
-  p.points = {{r.left(), r.top()}, {r.right(), r.top()}, {r.right(), r.bottom()}, {r.left(), r.bottom()}};
-  p.closed = true;
-  p.fill = fill;
-  return p;
-}
-
 PathItem hairline(Point a, Point b) {
   PathItem p;
   p.points = {a, b};
@@ -91,7 +83,7 @@ DisplayPage to_press_sheet(DisplayPage page, const PressSpec& press, const PageS
   const Rect trim{d, d, page.width, page.height};
   const Rect bleed = trim.inflate(g.bleed);
   if (press.background) {
-    page.items.insert(page.items.begin(), rectangle(bleed, *press.background));
+    page.items.insert(page.items.begin(), filled_rect(bleed, *press.background));
     for (auto& f : page.figures) ++f.first, ++f.end;  // the panels' items moved up by one
   }
   if (!press.any()) return page;

@@ -40,6 +40,16 @@ struct PathItem {
   std::optional<Hatch> hatch;  ///< closed shapes: pattern over the fill
 };
 
+/// A rectangle filled with `fill`: corners from the top left, clockwise
+/// on the page.
+inline PathItem filled_rect(const Rect& r, Rgb fill) {
+  PathItem p;
+  p.points = {{r.left(), r.top()}, {r.right(), r.top()}, {r.right(), r.bottom()}, {r.left(), r.bottom()}};
+  p.closed = true;
+  p.fill = fill;
+  return p;
+}
+
 struct CircleItem {
   Point centre;
   double radius = 1;

@@ -22,10 +22,7 @@ namespace {
 constexpr double kBandFill = 0.72;  // as for side-by-side bars
 
 PathItem segment(const Rect& r, Rgb fill, const PageStyle& st) {
-  PathItem p;
-  p.points = {{r.x, r.y}, {r.right(), r.y}, {r.right(), r.bottom()}, {r.x, r.bottom()}};
-  p.closed = true;
-  p.fill = fill;
+  PathItem p = filled_rect(r, fill);
   p.stroke = Stroke{st.ink.paper, st.rule_width() * 1.5, {}, false};  // a paper rim parts the segments
   return p;
 }

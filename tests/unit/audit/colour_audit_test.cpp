@@ -19,14 +19,6 @@ TextItem text(const std::string& s, Rgb colour, double size, Point origin) {
   return TextItem{t, origin, colour, TextRole::note};
 }
 
-PathItem rect(double x, double y, double w, double h, Rgb fill) {
-  PathItem p;
-  p.points = {{x, y}, {x + w, y}, {x + w, y + h}, {x, y + h}};
-  p.closed = true;
-  p.fill = fill;
-  return p;
-}
-
 std::vector<Diagnostic> audit(const DisplayPage& page) {
   PageSpec spec;
   spec.loc = {"page.yaml", 1, 1};
@@ -49,7 +41,7 @@ TEST_CASE("text on paper: 4.54:1 passes and 4.48:1 fails SC 1.4.3", "[audit][col
 
 TEST_CASE("text is measured against the filled shape under it, and large text needs 3:1", "[audit][colour]") {
   DisplayPage page;
-  page.add(rect(0, 0, 200, 200, rgb8(0x76, 0x76, 0x76)));
+  page.add(filled_rect({0, 0, 200, 200}, rgb8(0x76, 0x76, 0x76)));
   // White on #767676 is 4.54:1 (the same pair, reversed): passes.
   page.add(text("white", Rgb{1, 1, 1}, 8, {10, 20}));
   // Black on #767676: (0.1812 + 0.05) / 0.05 ≈ 4.62:1, passes.
@@ -65,7 +57,7 @@ TEST_CASE("text is measured against the filled shape under it, and large text ne
 
 TEST_CASE("text over a fill pattern is held to the pattern's ink as well", "[audit][colour]") {
   DisplayPage page;
-  PathItem bar = rect(0, 0, 200, 200, rgb8(0x20, 0x30, 0x60));
+  PathItem bar = filled_rect({0, 0, 200, 200}, rgb8(0x20, 0x30, 0x60));
   bar.hatch = Hatch{Hatch::Kind::lines, 45, 3, 0.6, Rgb{1, 1, 1}};
   page.add(bar);
   page.add(text("on hatch", Rgb{1, 1, 1}, 8, {10, 20}));
