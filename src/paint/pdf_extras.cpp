@@ -11,6 +11,7 @@
 #include <qpdf/QPDFPageDocumentHelper.hh>
 #include <qpdf/QPDFXRefEntry.hh>
 
+#include <algorithm>
 #include <cctype>
 #include <cstdio>
 #include <map>
@@ -52,54 +53,57 @@ void embed(QPDF& q, const std::vector<EmbeddedFile>& files, Changed& changed) {
   if (names.isDictionary()) mark(changed, names.getKey("/EmbeddedFiles"));
 }
 
-void link(QPDF& q, const std::vector<PageLinks>& pages, Changed& changed) {
-  bool any = false;
-  for (const auto& p : pages) any = any || !p.links.empty();
-  if (!any) return;  // reading every page costs memory in a long report
-  auto all = QPDFPageDocumentHelper(q).getAllPages();
-  for (std::size_t i = 0; i < pages.size() && i < all.size(); ++i) {
-    if (pages[i].links.empty()) continue;
-    QPDFObjectHandle page = all[i].getObjectHandle();
-    QPDFObjectHandle annots = page.getKey("/Annots");
-    if (!annots.isArray()) {
-      annots = QPDFObjectHandle::newArray();
-      page.replaceKey("/Annots", annots);
-    }
-    mark(changed, page);
-    mark(changed, annots);
-    const double h = pages[i].height;
-    for (const auto& l : pages[i].links) {
-      auto action = QPDFObjectHandle::newDictionary();
-      action.replaceKey("/S", QPDFObjectHandle::newName("/URI"));
-      action.replaceKey("/URI", QPDFObjectHandle::newString(l.uri));
-      auto a = QPDFObjectHandle::newDictionary();
-      a.replaceKey("/Type", QPDFObjectHandle::newName("/Annot"));
-      a.replaceKey("/Subtype", QPDFObjectHandle::newName("/Link"));
-      // User space has y up from the page's foot (ISO 32000-1 §8.3.2.3).
-      a.replaceKey("/Rect", QPDFObjectHandle::newArray(QPDFObjectHandle::Rectangle(
-                                l.area.left(), h - l.area.bottom(), l.area.right(), h - l.area.top())));
-      a.replaceKey("/Border", QPDFObjectHandle::parse("[0 0 0]"));  // §12.5.2: no visible border
-      a.replaceKey("/A", action);
-      annots.appendItem(q.makeIndirectObject(a));
-    }
+// A page's links as /Link annotations with URI actions.
+void add_links(QPDF& q, QPDFObjectHandle page, const PageLinks& links, Changed& changed) {
+  if (links.links.empty()) return;
+  QPDFObjectHandle annots = page.getKey("/Annots");
+  if (!annots.isArray()) {
+    annots = QPDFObjectHandle::newArray();
+    page.replaceKey("/Annots", annots);
+  }
+  mark(changed, page);
+  mark(changed, annots);
+  const double h = links.height;
+  for (const auto& l : links.links) {
+    auto action = QPDFObjectHandle::newDictionary();
+    action.replaceKey("/S", QPDFObjectHandle::newName("/URI"));
+    action.replaceKey("/URI", QPDFObjectHandle::newString(l.uri));
+    auto a = QPDFObjectHandle::newDictionary();
+    a.replaceKey("/Type", QPDFObjectHandle::newName("/Annot"));
+    a.replaceKey("/Subtype", QPDFObjectHandle::newName("/Link"));
+    // User space has y up from the page's foot (ISO 32000-1 §8.3.2.3).
+    a.replaceKey("/Rect", QPDFObjectHandle::newArray(QPDFObjectHandle::Rectangle(
+                              l.area.left(), h - l.area.bottom(), l.area.right(), h - l.area.top())));
+    a.replaceKey("/Border", QPDFObjectHandle::parse("[0 0 0]"));  // §12.5.2: no visible border
+    a.replaceKey("/A", action);
+    annots.appendItem(q.makeIndirectObject(a));
   }
 }
 
-// Page boxes in user space, y up from the page's foot (ISO 32000-1 §8.3.2.3).
-void set_boxes(QPDF& q, const std::vector<PageLinks>& pages, Changed& changed) {
-  bool any = false;
-  for (const auto& p : pages) any = any || p.trim_box || p.bleed_box;
+// A page's print boxes, in user space, y up from the page's foot (ISO
+// 32000-1 §8.3.2.3).
+void set_boxes(QPDFObjectHandle page, const PageLinks& p, Changed& changed) {
+  if (!p.trim_box && !p.bleed_box) return;
+  const double h = p.height;
+  auto box = [h](const Rect& r) {
+    return QPDFObjectHandle::newArray(QPDFObjectHandle::Rectangle(r.left(), h - r.bottom(), r.right(), h - r.top()));
+  };
+  if (p.trim_box) page.replaceKey("/TrimBox", box(*p.trim_box));
+  if (p.bleed_box) page.replaceKey("/BleedBox", box(*p.bleed_box));
+  mark(changed, page);
+}
+
+// Links and print boxes, page by page. The pages are read only when some
+// page has either: reading every page costs memory in a long report.
+void edit_pages(QPDF& q, const std::vector<PageLinks>& pages, Changed& changed) {
+  const bool any = std::any_of(pages.begin(), pages.end(),
+                               [](const PageLinks& p) { return !p.links.empty() || p.trim_box || p.bleed_box; });
   if (!any) return;
   auto all = QPDFPageDocumentHelper(q).getAllPages();
   for (std::size_t i = 0; i < pages.size() && i < all.size(); ++i) {
     QPDFObjectHandle page = all[i].getObjectHandle();
-    const double h = pages[i].height;
-    auto box = [h](const Rect& r) {
-      return QPDFObjectHandle::newArray(QPDFObjectHandle::Rectangle(r.left(), h - r.bottom(), r.right(), h - r.top()));
-    };
-    if (pages[i].trim_box) page.replaceKey("/TrimBox", box(*pages[i].trim_box));
-    if (pages[i].bleed_box) page.replaceKey("/BleedBox", box(*pages[i].bleed_box));
-    if (pages[i].trim_box || pages[i].bleed_box) mark(changed, page);
+    add_links(q, page, pages[i], changed);
+    set_boxes(page, pages[i], changed);
   }
 }
 
@@ -212,8 +216,7 @@ void write_pdf_with_extras(std::FILE* cairo_pdf, const std::string& date, const 
     info.replaceKey("/CreationDate", QPDFObjectHandle::newString(date));
     mark(changed, info);
     if (!files.empty()) embed(q, files, changed);
-    link(q, pages, changed);
-    set_boxes(q, pages, changed);
+    edit_pages(q, pages, changed);
     std::map<QPDFObjGen, std::string> rewritten;
     if (!figure_alts.empty()) rewritten = figures_with_alts(q, cairo_pdf, figure_alts);
     if (!labels.empty()) label(q, labels, changed);
