@@ -75,18 +75,25 @@ std::vector<PageLabelRange> page_labels(std::size_t front_pages) {
           {front_pages, PageNumberStyle::decimal, static_cast<int>(front_pages) + 1}};
 }
 
-}  // namespace
-
-void check_report(const std::string& path, DiagnosticSink& sink, const Limits& limits, const std::string& font_dir,
-                  bool greyscale) {
+// The report description, read with its pages; every error goes to `sink`
+// and the first is thrown.
+ReportSpec read_report_or_throw(const std::string& path, DiagnosticSink& sink, const Limits& limits) {
   std::vector<Diagnostic> errors;
   std::optional<ReportSpec> report = read_report(path, errors, limits);
   if (!report) {
     for (auto& e : errors) sink.report(e);
     throw InputError(errors.front());
   }
+  return std::move(*report);
+}
+
+}  // namespace
+
+void check_report(const std::string& path, DiagnosticSink& sink, const Limits& limits, const std::string& font_dir,
+                  bool greyscale) {
+  const ReportSpec report = read_report_or_throw(path, sink, limits);
   TableCache cache([&](const TableSource& s) { return load_table(s, limits); });
-  std::vector<PlannedPage> plan = plan_report(*report, cache, limits);
+  std::vector<PlannedPage> plan = plan_report(report, cache, limits);
   const FontSet fonts = open_bundled_fonts(font_dir);
   for (auto& page : plan) {
     DiagnosticSink found;
@@ -114,14 +121,9 @@ void render_report(const std::string& path, DiagnosticSink& sink, const ReportRu
     return std::chrono::duration<double>(std::chrono::steady_clock::now() - t0).count();
   };
   auto t0 = std::chrono::steady_clock::now();
-  std::vector<Diagnostic> errors;
-  std::optional<ReportSpec> report = read_report(path, errors, o.limits);  // 1. read the report and its pages
-  if (!report) {
-    for (auto& e : errors) sink.report(e);
-    throw InputError(errors.front());
-  }
+  const ReportSpec report = read_report_or_throw(path, sink, o.limits);  // 1. read the report and its pages
   TableCache cache([&](const TableSource& s) { return load_table(s, o.limits); });
-  std::vector<PlannedPage> plan = plan_report(*report, cache, o.limits);  // every page, placeholders filled
+  std::vector<PlannedPage> plan = plan_report(report, cache, o.limits);  // every page, placeholders filled
   const FontSet fonts = open_bundled_fonts(o.font_dir);
   times.read += since(t0);
 
@@ -143,11 +145,11 @@ void render_report(const std::string& path, DiagnosticSink& sink, const ReportRu
   const PageStyle contents_style = style_for_page(first_spec, fonts);
   const ContentsSheet sheet{first_spec.sheet.width, first_spec.sheet.height, first_spec.sheet.margins};
   std::size_t contents = 0;
-  if (report->contents) {
-    const std::size_t rows = contents_rows(*report, plan, at).size();
+  if (report.contents) {
+    const std::size_t rows = contents_rows(report, plan, at).size();
     contents = contents_page_count(rows, sheet, contents_style);
   }
-  const std::size_t front = (report->cover ? 1 : 0) + contents;  // pages before the first planned page
+  const std::size_t front = (report.cover ? 1 : 0) + contents;  // pages before the first planned page
   std::size_t total = front;
   for (std::size_t i = 0; i < plan.size(); ++i) {
     at[i].first = total;
@@ -155,12 +157,12 @@ void render_report(const std::string& path, DiagnosticSink& sink, const ReportRu
   }
 
   PaintOptions po;
-  po.info.title = report->title;
-  po.info.author = report->document.author;
-  po.info.subject = report->document.subject;
-  po.info.keywords = report->document.keywords;
+  po.info.title = report.title;
+  po.info.author = report.document.author;
+  po.info.subject = report.document.subject;
+  po.info.keywords = report.document.keywords;
   po.info.creation_time = o.creation_time;
-  po.info.outline = outline(*report, plan, at, front, contents);
+  po.info.outline = outline(report, plan, at, front, contents);
   po.info.page_labels = page_labels(front);
   auto painter = make_painter(OutputFormat::pdf, out, po);
 
@@ -171,10 +173,10 @@ void render_report(const std::string& path, DiagnosticSink& sink, const ReportRu
     const PlaceholderValues values{{"section", section}};
     RunningText text;
     if (head) {
-      text.head = report->running_head.empty() ? report->title : fill_placeholders(report->running_head.value, values);
+      text.head = report.running_head.empty() ? report.title : fill_placeholders(report.running_head.value, values);
       text.section = section;
     }
-    text.foot = fill_placeholders(report->running_foot.value, values);
+    text.foot = fill_placeholders(report.running_foot.value, values);
     text.page = done + 1;
     text.pages = total;
     add_running_text(page, margins, text, style);
@@ -186,14 +188,14 @@ void render_report(const std::string& path, DiagnosticSink& sink, const ReportRu
     if (o.progress) o.progress(done, total);
   };
 
-  if (report->cover) {
-    DisplayPage page = cover_page(report->cover_title.empty() ? report->title : report->cover_title,
-                                  report->cover_lines, sheet, contents_style);
+  if (report.cover) {
+    DisplayPage page = cover_page(report.cover_title.empty() ? report.title : report.cover_title,
+                                  report.cover_lines, sheet, contents_style);
     paint(page, sheet.margins, contents_style, "", false);
   }
   if (contents > 0)
-    for (auto& page : contents_pages(report->contents_title, contents_rows(*report, plan, at), sheet, contents_style))
-      paint(page, sheet.margins, contents_style, report->contents_title);
+    for (auto& page : contents_pages(report.contents_title, contents_rows(report, plan, at), sheet, contents_style))
+      paint(page, sheet.margins, contents_style, report.contents_title);
 
   // Later pages are composed on a second thread while earlier ones are
   // painted. Only that thread uses the table cache once painting starts.
@@ -214,7 +216,7 @@ void render_report(const std::string& path, DiagnosticSink& sink, const ReportRu
     merge(sink, c.found);
     const PageStyle style = style_for_page(plan[i].spec, fonts);
     for (auto& page : c.doc.pages)
-      paint(page, plan[i].spec.sheet.margins, style, report->sections[plan[i].section].title);
+      paint(page, plan[i].spec.sheet.margins, style, report.sections[plan[i].section].title);
   }
   const auto f0 = std::chrono::steady_clock::now();
   painter->finish();
