@@ -7,8 +7,11 @@ pkg_check_modules(HARFBUZZ REQUIRED IMPORTED_TARGET harfbuzz)
 pkg_check_modules(FREETYPE REQUIRED IMPORTED_TARGET freetype2)
 # libunibreak: Unicode line breaking (UAX #14) for wrapped notes and callouts.
 pkg_check_modules(UNIBREAK REQUIRED IMPORTED_TARGET libunibreak)
-# libqpdf: embeds the plotted rows and adds link annotations to finished PDFs.
-pkg_check_modules(QPDF REQUIRED IMPORTED_TARGET libqpdf)
+# zlib: compresses the files forme embeds in a finished PDF (Flate, the
+# filter every PDF reader knows).
+pkg_check_modules(ZLIB REQUIRED IMPORTED_TARGET zlib)
+# Nettle: the MD5 checksum PDF asks for in an embedded file's /Params.
+pkg_check_modules(NETTLE REQUIRED IMPORTED_TARGET nettle)
 # fontconfig: finds installed fonts for characters the bundled Noto Sans lacks.
 pkg_check_modules(FONTCONFIG REQUIRED IMPORTED_TARGET fontconfig)
 # FriBidi: the Unicode Bidirectional Algorithm (UAX #9) for right-to-left text.
@@ -18,7 +21,7 @@ find_package(CLI11 REQUIRED)
 
 add_library(forme_deps INTERFACE)
 target_link_libraries(forme_deps INTERFACE
-  PkgConfig::CAIRO PkgConfig::HARFBUZZ PkgConfig::FREETYPE PkgConfig::UNIBREAK PkgConfig::QPDF
+  PkgConfig::CAIRO PkgConfig::HARFBUZZ PkgConfig::FREETYPE PkgConfig::UNIBREAK PkgConfig::ZLIB PkgConfig::NETTLE
   PkgConfig::FONTCONFIG PkgConfig::FRIBIDI
   yaml-cpp CLI11::CLI11)
 add_library(forme::deps ALIAS forme_deps)

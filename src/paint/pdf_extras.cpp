@@ -1,200 +1,205 @@
 #include "paint/pdf_extras.h"
 
-#include "paint/pdf_update.h"  // first: it sets qpdf's pointer mode
-
-#include <qpdf/Buffer.hh>
-#include <qpdf/QPDF.hh>
-#include <qpdf/QPDFEFStreamObjectHelper.hh>
-#include <qpdf/QPDFEmbeddedFileDocumentHelper.hh>
-#include <qpdf/QPDFExc.hh>
-#include <qpdf/QPDFFileSpecObjectHelper.hh>
-#include <qpdf/QPDFPageDocumentHelper.hh>
-#include <qpdf/QPDFXRefEntry.hh>
+#include <nettle/md5.h>
 
 #include <algorithm>
-#include <cctype>
 #include <cstdio>
 #include <map>
-#include <set>
 #include <stdexcept>
 #include <string>
 #include <string_view>
 #include <vector>
 
+#include "paint/pdf_file_reader.h"
+#include "paint/pdf_syntax.h"
+#include "paint/pdf_update.h"
+
 namespace forme {
 
 namespace {
 
-// The existing objects an edit changes, to be written again.
-using Changed = std::set<QPDFObjGen>;
+using pdf::dict_value;
+using pdf::dict_with;
 
-void mark(Changed& changed, QPDFObjectHandle o) {
-  if (o.isIndirect()) changed.insert(o.getObjGen());
+// The object a value refers to, or nullopt when it is direct.
+std::optional<int> ref(std::optional<std::string_view> value) {
+  return value ? pdf::reference(*value) : std::nullopt;
 }
 
-void embed(QPDF& q, const std::vector<EmbeddedFile>& files, Changed& changed) {
-  QPDFEmbeddedFileDocumentHelper tree(q);
-  auto associated = QPDFObjectHandle::newArray();
+// The catalog (§7.7.2), read once and written once at the end.
+struct Catalog {
+  int number = 0;
+  std::string text;
+};
+
+std::string hex(const unsigned char* bytes, std::size_t n) {
+  std::string out = "<";
+  char pair[4];
+  for (std::size_t i = 0; i < n; ++i) {
+    std::snprintf(pair, sizeof pair, "%02x", bytes[i]);
+    out += pair;
+  }
+  return out + ">";
+}
+
+// The MD5 digest (RFC 1321) an embedded file's /CheckSum holds (§7.11.4.2).
+std::string md5_string(std::string_view data) {
+  md5_ctx ctx;
+  md5_init(&ctx);
+  md5_update(&ctx, data.size(), reinterpret_cast<const std::uint8_t*>(data.data()));
+  unsigned char digest[MD5_DIGEST_SIZE];
+  md5_digest(&ctx, MD5_DIGEST_SIZE, digest);
+  return hex(digest, MD5_DIGEST_SIZE);
+}
+
+// Each file becomes an embedded file stream with its size and checksum,
+// referred to by a file specification listed in the catalog's name tree
+// and its /AF array. No dates: the bytes depend on the data alone.
+void embed(const pdf::FileReader& file, pdf::Update& update, Catalog& catalog, const std::vector<EmbeddedFile>& files) {
+  std::map<std::string, int> by_name;  // a name tree's keys are sorted (§7.9.6); a repeated name keeps its last file
+  std::string associated = "[";
   for (const auto& f : files) {
-    // createEFStream stores /Params /Size and /CheckSum; no dates, so the
-    // bytes depend on the data alone.
-    auto stream = QPDFEFStreamObjectHelper::createEFStream(q, f.bytes);
-    if (!f.mime_type.empty()) stream.setSubtype(f.mime_type);
-    auto spec = QPDFFileSpecObjectHelper::createFileSpec(q, f.name, stream);
-    if (!f.description.empty()) spec.setDescription(f.description);
-    spec.getObjectHandle().replaceKey("/AFRelationship", QPDFObjectHandle::newName("/Data"));
-    tree.replaceEmbeddedFile(f.name, spec);
-    associated.appendItem(spec.getObjectHandle());
+    std::string entries = "/Type /EmbeddedFile";
+    if (!f.mime_type.empty()) entries += " /Subtype " + pdf::name(f.mime_type);
+    entries += " /Params << /Size " + std::to_string(f.bytes.size()) + " /CheckSum " + md5_string(f.bytes) + " >>";
+    const int stream = update.add_stream(entries, f.bytes);
+    const std::string ef = std::to_string(stream) + " 0 R";
+    std::string spec = "<< /Type /Filespec /F " + pdf::byte_string(f.name) + " /UF " + pdf::text_string(f.name) +
+                       " /EF << /F " + ef + " /UF " + ef + " >> /AFRelationship /Data";
+    if (!f.description.empty()) spec += " /Desc " + pdf::text_string(f.description);
+    const int number = update.add(spec + " >>");
+    by_name[f.name] = number;
+    associated += " " + std::to_string(number) + " 0 R";
   }
-  q.getRoot().replaceKey("/AF", associated);
-  mark(changed, q.getRoot());
-  QPDFObjectHandle names = q.getRoot().getKey("/Names");
-  mark(changed, names);
-  if (names.isDictionary()) mark(changed, names.getKey("/EmbeddedFiles"));
+  std::string names = "[";
+  for (const auto& [n, number] : by_name) names += " " + pdf::text_string(n) + " " + std::to_string(number) + " 0 R";
+  const std::string tree = "<< /Names " + names + " ] >>";
+  catalog.text = dict_with(catalog.text, "/AF", associated + " ]");
+  const auto names_dict = dict_value(catalog.text, "/Names");
+  if (!names_dict) catalog.text = dict_with(catalog.text, "/Names", "<< /EmbeddedFiles " + tree + " >>");
+  else if (auto r = pdf::reference(*names_dict)) update.replace(*r, dict_with(file.object(*r), "/EmbeddedFiles", tree));
+  else catalog.text = dict_with(catalog.text, "/Names", dict_with(*names_dict, "/EmbeddedFiles", tree));
 }
 
-// A page's links as /Link annotations with URI actions.
-void add_links(QPDF& q, QPDFObjectHandle page, const PageLinks& links, Changed& changed) {
-  if (links.links.empty()) return;
-  QPDFObjectHandle annots = page.getKey("/Annots");
-  if (!annots.isArray()) {
-    annots = QPDFObjectHandle::newArray();
-    page.replaceKey("/Annots", annots);
+// The page objects in page order, down the page tree (§7.7.3.2).
+void collect_pages(const pdf::FileReader& file, int node, int depth, std::vector<int>& pages) {
+  if (depth > 32) throw std::runtime_error("PDF file: the page tree is too deep");
+  const std::string text = file.object(node);
+  const auto type = dict_value(text, "/Type");
+  if (type && pdf::is_name(*type, "/Page")) {
+    pages.push_back(node);
+    return;
   }
-  mark(changed, page);
-  mark(changed, annots);
-  const double h = links.height;
-  for (const auto& l : links.links) {
-    auto action = QPDFObjectHandle::newDictionary();
-    action.replaceKey("/S", QPDFObjectHandle::newName("/URI"));
-    action.replaceKey("/URI", QPDFObjectHandle::newString(l.uri));
-    auto a = QPDFObjectHandle::newDictionary();
-    a.replaceKey("/Type", QPDFObjectHandle::newName("/Annot"));
-    a.replaceKey("/Subtype", QPDFObjectHandle::newName("/Link"));
-    // User space has y up from the page's foot (ISO 32000-1 §8.3.2.3).
-    a.replaceKey("/Rect", QPDFObjectHandle::newArray(QPDFObjectHandle::Rectangle(
-                              l.area.left(), h - l.area.bottom(), l.area.right(), h - l.area.top())));
-    a.replaceKey("/Border", QPDFObjectHandle::parse("[0 0 0]"));  // §12.5.2: no visible border
-    a.replaceKey("/A", action);
-    annots.appendItem(q.makeIndirectObject(a));
-  }
+  const auto kids = dict_value(text, "/Kids");
+  if (!kids) return;
+  for (std::string_view kid : pdf::array_items(*kids))
+    if (auto r = pdf::reference(kid)) collect_pages(file, *r, depth + 1, pages);
 }
 
-// A page's print boxes, in user space, y up from the page's foot (ISO
-// 32000-1 §8.3.2.3).
-void set_boxes(QPDFObjectHandle page, const PageLinks& p, Changed& changed) {
-  if (!p.trim_box && !p.bleed_box) return;
-  const double h = p.height;
-  auto box = [h](const Rect& r) {
-    return QPDFObjectHandle::newArray(QPDFObjectHandle::Rectangle(r.left(), h - r.bottom(), r.right(), h - r.top()));
-  };
-  if (p.trim_box) page.replaceKey("/TrimBox", box(*p.trim_box));
-  if (p.bleed_box) page.replaceKey("/BleedBox", box(*p.bleed_box));
-  mark(changed, page);
+// A rectangle in user space, y up from the page's foot (§8.3.2.3), from
+// one in page coordinates, y down.
+std::string user_rect(const Rect& r, double page_height) {
+  return "[ " + pdf::number(r.left()) + " " + pdf::number(page_height - r.bottom()) + " " + pdf::number(r.right()) +
+         " " + pdf::number(page_height - r.top()) + " ]";
 }
 
-// Links and print boxes, page by page. The pages are read only when some
-// page has either: reading every page costs memory in a long report.
-void edit_pages(QPDF& q, const std::vector<PageLinks>& pages, Changed& changed) {
+// A page's links as /Link annotations (§12.5.6.5) with URI actions
+// (§12.6.4.7) and no border (§12.5.2), and its print boxes (§14.11.2).
+std::string edit_page(std::string page, pdf::Update& update, const pdf::FileReader& file, const PageLinks& p) {
+  if (p.trim_box) page = dict_with(page, "/TrimBox", user_rect(*p.trim_box, p.height));
+  if (p.bleed_box) page = dict_with(page, "/BleedBox", user_rect(*p.bleed_box, p.height));
+  if (p.links.empty()) return page;
+  std::string added;
+  for (const auto& l : p.links)
+    added += " " + std::to_string(update.add("<< /Type /Annot /Subtype /Link /Rect " + user_rect(l.area, p.height) +
+                                             " /Border [ 0 0 0 ] /A << /S /URI /URI " + pdf::byte_string(l.uri) +
+                                             " >> >>")) +
+             " 0 R";
+  const auto annots = dict_value(page, "/Annots");
+  if (auto r = ref(annots)) {  // an array object of its own: extend it there
+    const std::string old = file.object(*r);
+    const std::size_t close = old.rfind(']');
+    if (close == std::string::npos) throw std::runtime_error("PDF file: a page's /Annots is not an array");
+    update.replace(*r, old.substr(0, close) + added + " ]");
+    return page;
+  }
+  std::string list = "[";
+  if (annots)
+    for (std::string_view a : pdf::array_items(*annots)) list += " " + std::string(a);
+  return dict_with(page, "/Annots", list + added + " ]");
+}
+
+// Links and print boxes, page by page. The page tree is read only when some
+// page has either.
+void edit_pages(const pdf::FileReader& file, pdf::Update& update, const Catalog& catalog,
+                const std::vector<PageLinks>& pages) {
   const bool any = std::any_of(pages.begin(), pages.end(),
                                [](const PageLinks& p) { return !p.links.empty() || p.trim_box || p.bleed_box; });
   if (!any) return;
-  auto all = QPDFPageDocumentHelper(q).getAllPages();
-  for (std::size_t i = 0; i < pages.size() && i < all.size(); ++i) {
-    QPDFObjectHandle page = all[i].getObjectHandle();
-    add_links(q, page, pages[i], changed);
-    set_boxes(page, pages[i], changed);
+  const auto root = ref(dict_value(catalog.text, "/Pages"));
+  if (!root) throw std::runtime_error("PDF file: the catalog has no page tree");
+  std::vector<int> numbers;
+  collect_pages(file, *root, 0, numbers);
+  for (std::size_t i = 0; i < pages.size() && i < numbers.size(); ++i) {
+    const PageLinks& p = pages[i];
+    if (p.links.empty() && !p.trim_box && !p.bleed_box) continue;
+    update.replace(numbers[i], edit_page(file.object(numbers[i]), update, file, p));
   }
 }
 
-// The text of indirect object `id`, from "N G obj" to "endobj", read from
-// the file at its cross-reference offset; empty if it cannot be found.
-std::string object_text(std::FILE* file, const std::map<QPDFObjGen, QPDFXRefEntry>& xref, QPDFObjGen id) {
-  const auto entry = xref.find(id);
-  if (entry == xref.end() || entry->second.getType() != 1) return {};
-  if (std::fseek(file, static_cast<long>(entry->second.getOffset()), SEEK_SET) != 0) return {};
-  std::string text;
-  char block[4096];
-  while (text.size() < (1u << 20)) {
-    const std::size_t n = std::fread(block, 1, sizeof block, file);
-    if (n == 0) return {};
-    text.append(block, n);
-    if (const std::size_t end = text.find("endobj"); end != std::string::npos) {
-      text.resize(end + 6);
-      return text;
-    }
-  }
-  return {};
+// Whether a structure element names its type /Figure (its /S key).
+bool is_figure(std::string_view element) {
+  const auto s = dict_value(element, "/S");
+  return s && pdf::is_name(*s, "/Figure");
 }
 
-bool is_delimiter(char c) {
-  return std::isspace(static_cast<unsigned char>(c)) || std::string_view("()<>[]{}/%").find(c) != std::string_view::npos;
-}
-
-// Whether a structure element's text names its type /Figure (the /S key).
-bool is_figure_element(const std::string& text) {
-  for (std::size_t at = text.find("/S"); at != std::string::npos; at = text.find("/S", at + 2)) {
-    std::size_t i = at + 2;
-    if (i >= text.size() || !is_delimiter(text[i])) continue;  // /Subtype, /StructParents…
-    while (i < text.size() && std::isspace(static_cast<unsigned char>(text[i]))) ++i;
-    const std::string_view figure = "/Figure";
-    return text.compare(i, figure.size(), figure) == 0 &&
-           (i + figure.size() >= text.size() || is_delimiter(text[i + figure.size()]));
-  }
-  return false;
+// The value `value` stands for: the object it refers to, or itself.
+std::string resolve(const pdf::FileReader& file, std::string_view value) {
+  if (auto r = pdf::reference(value)) return file.object(*r);
+  return std::string(value);
 }
 
 // Cairo writes the structure tree as a Document element whose children are
-// the elements of every page in drawing order, each a small dictionary.
-// Thousands of them read through qpdf would cost over a kilobyte each in
-// its object cache, so the children are read as text: each /Figure gets its
-// /Alt added just inside its "<<", the k-th figure the k-th text.
-std::map<QPDFObjGen, std::string> figures_with_alts(QPDF& q, std::FILE* file, const std::vector<std::string>& alts) {
-  std::map<QPDFObjGen, std::string> out;
+// the elements of every page in drawing order. Each /Figure gets its /Alt
+// (§14.9.3), the k-th figure the k-th text. Elements are read one by one
+// from the file, so a long report's thousands of them are never all held.
+void add_figure_alts(const pdf::FileReader& file, pdf::Update& update, const Catalog& catalog,
+                     const std::vector<std::string>& alts) {
+  const auto root = dict_value(catalog.text, "/StructTreeRoot");
+  if (!root) return;
+  std::string node = resolve(file, *root);
+  std::string kids_text = std::string(dict_value(node, "/K").value_or(""));
   // Down through the grouping elements to the list of page elements.
-  QPDFObjectHandle node = q.getRoot().getKey("/StructTreeRoot").getKey("/K");
   for (int depth = 0; depth < 8; ++depth) {
-    if (node.isArray() && node.getArrayNItems() == 1) node = node.getArrayItem(0);
-    QPDFObjectHandle type = node.isDictionary() ? node.getKey("/S") : QPDFObjectHandle::newNull();
-    if (!type.isName() || (type.getName() != "/Document" && type.getName() != "/Part" && type.getName() != "/Sect"))
+    auto items = pdf::array_items(kids_text);
+    if (items.size() != 1) break;
+    node = resolve(file, items[0]);
+    const auto type = dict_value(node, "/S");
+    if (!type || !(pdf::is_name(*type, "/Document") || pdf::is_name(*type, "/Part") || pdf::is_name(*type, "/Sect")))
       break;
-    node = node.getKey("/K");
+    kids_text = std::string(dict_value(node, "/K").value_or(""));
   }
-  std::vector<QPDFObjectHandle> kids;
-  if (node.isArray()) kids = node.getArrayAsVector();
-  else kids.push_back(node);
-  const auto xref = q.getXRefTable();
   std::size_t next = 0;
-  for (std::size_t i = 0; i < kids.size() && next < alts.size(); ++i) {
-    QPDFObjectHandle kid = kids[i];
-    if (!kid.isIndirect()) continue;
-    std::string text = object_text(file, xref, kid.getObjGen());
-    const std::size_t open = text.find("<<");
-    if (open == std::string::npos || !is_figure_element(text)) continue;
-    text.insert(open + 2, " /Alt " + QPDFObjectHandle::newUnicodeString(alts[next++]).unparse());
-    out.emplace(kid.getObjGen(), text + "\n");
+  for (std::string_view kid : pdf::array_items(kids_text)) {
+    if (next == alts.size()) break;
+    const auto number = pdf::reference(kid);
+    if (!number) continue;
+    const std::string element = file.object(*number);
+    if (!is_figure(element)) continue;
+    update.replace(*number, dict_with(element, "/Alt", pdf::text_string(alts[next++])));
   }
-  return out;
 }
 
-// A flat number tree (ISO 32000-1 §7.9.7) of page label dictionaries
-// (§12.4.2): /S /D decimal or /S /r lower-case roman, /St the first number.
-void label(QPDF& q, const std::vector<PageLabelRange>& labels, Changed& changed) {
-  auto nums = QPDFObjectHandle::newArray();
+// A flat number tree (§7.9.7) of page label dictionaries (§12.4.2): /S /D
+// decimal or /S /r lower-case roman, /St the first number.
+std::string label_tree(const std::vector<PageLabelRange>& labels) {
+  std::string nums = "[";
   for (const auto& r : labels) {
-    auto d = QPDFObjectHandle::newDictionary();
-    d.replaceKey("/S", QPDFObjectHandle::newName(r.style == PageNumberStyle::lower_roman ? "/r" : "/D"));
-    if (r.start != 1) d.replaceKey("/St", QPDFObjectHandle::newInteger(r.start));
-    nums.appendItem(QPDFObjectHandle::newInteger(static_cast<long long>(r.first_page)));
-    nums.appendItem(d);
+    nums += " " + std::to_string(r.first_page) + " << /S " + (r.style == PageNumberStyle::lower_roman ? "/r" : "/D");
+    if (r.start != 1) nums += " /St " + std::to_string(r.start);
+    nums += " >>";
   }
-  auto tree = QPDFObjectHandle::newDictionary();
-  tree.replaceKey("/Nums", nums);
-  // Direct in the catalog: making an indirect object has qpdf read every
-  // object in the file first, which for a long report costs more memory
-  // than the whole rest of the run.
-  q.getRoot().replaceKey("/PageLabels", tree);
-  mark(changed, q.getRoot());
+  return "<< /Nums " + nums + " ] >>";
 }
 
 }  // namespace
@@ -203,24 +208,27 @@ void write_pdf_with_extras(std::FILE* cairo_pdf, const std::string& date, const 
                            const std::vector<PageLinks>& pages, const std::vector<std::string>& figure_alts,
                            const std::vector<PageLabelRange>& labels, std::ostream& out) {
   try {
-    QPDF q;
-    q.setSuppressWarnings(true);
-    std::rewind(cairo_pdf);
-    q.processFile("forme output", cairo_pdf, false);
-    Changed changed;
-    QPDFObjectHandle info = q.getTrailer().getKey("/Info");
-    if (!info.isDictionary()) {
-      info = q.makeIndirectObject(QPDFObjectHandle::newDictionary());
-      q.getTrailer().replaceKey("/Info", info);
-    }
-    info.replaceKey("/CreationDate", QPDFObjectHandle::newString(date));
-    mark(changed, info);
-    if (!files.empty()) embed(q, files, changed);
-    edit_pages(q, pages, changed);
-    std::map<QPDFObjGen, std::string> rewritten;
-    if (!figure_alts.empty()) rewritten = figures_with_alts(q, cairo_pdf, figure_alts);
-    if (!labels.empty()) label(q, labels, changed);
-    write_incremental_update(q, cairo_pdf, changed, rewritten, out);
+    const pdf::FileReader file(cairo_pdf);
+    pdf::Update update(file);
+
+    const auto info = ref(dict_value(file.trailer(), "/Info"));
+    if (info) update.replace(*info, dict_with(file.object(*info), "/CreationDate", pdf::byte_string(date)));
+    else update.trailer = dict_with(update.trailer, "/Info", std::to_string(update.add("<< /CreationDate " + pdf::byte_string(date) + " >>")) + " 0 R");
+
+    Catalog catalog;
+    const auto root = ref(dict_value(file.trailer(), "/Root"));
+    if (!root) throw std::runtime_error("PDF file: the trailer has no catalog");
+    catalog.number = *root;
+    catalog.text = file.object(*root);
+    const std::string original_catalog = catalog.text;
+
+    if (!files.empty()) embed(file, update, catalog, files);
+    edit_pages(file, update, catalog, pages);
+    if (!figure_alts.empty()) add_figure_alts(file, update, catalog, figure_alts);
+    if (!labels.empty()) catalog.text = dict_with(catalog.text, "/PageLabels", label_tree(labels));
+    if (catalog.text != original_catalog) update.replace(catalog.number, catalog.text);
+
+    update.write(cairo_pdf, out);
   } catch (const std::exception& e) {
     throw std::runtime_error(std::string("PDF date, attachments and links: ") + e.what());
   }

@@ -1,16 +1,15 @@
 #include "paint/pdf_update.h"
 
-#include <qpdf/Buffer.hh>
-#include <qpdf/Pl_Buffer.hh>
-#include <qpdf/Pl_Flate.hh>
+#include <zlib.h>
 
-#include <cctype>
-#include <cstdio>
 #include <stdexcept>
 #include <string>
+#include <utility>
 #include <vector>
 
-namespace forme {
+#include "paint/pdf_syntax.h"
+
+namespace forme::pdf {
 
 namespace {
 
@@ -23,7 +22,7 @@ class CountingWriter {
     if (!out_) throw std::runtime_error("PDF file: write failed");
     at_ += n;
   }
-  void write(const std::string& s) { write(s.data(), s.size()); }
+  void write(std::string_view s) { write(s.data(), s.size()); }
   std::size_t at() const { return at_; }
 
  private:
@@ -31,91 +30,58 @@ class CountingWriter {
   std::size_t at_ = 0;
 };
 
-// Copies the original file to `w`; returns the offset its `startxref`
-// gives (ISO 32000-1 §7.5.5), read from the file's last kilobyte.
-std::size_t copy_original(std::FILE* original, CountingWriter& w) {
+// Copies the whole original file to `w`, ending on an end of line.
+void copy_original(std::FILE* original, CountingWriter& w) {
   std::rewind(original);
   std::vector<char> buffer(1 << 16);
-  std::string tail;
+  char last = '\n';
   for (;;) {
     const std::size_t n = std::fread(buffer.data(), 1, buffer.size(), original);
     if (n == 0) break;
     w.write(buffer.data(), n);
-    tail.append(buffer.data(), n);
-    if (tail.size() > 1024) tail.erase(0, tail.size() - 1024);
+    last = buffer[n - 1];
   }
   if (std::ferror(original)) throw std::runtime_error("PDF file: cannot read Cairo's output back");
-  const std::size_t key = tail.rfind("startxref");
-  if (key == std::string::npos) throw std::runtime_error("PDF file: Cairo's output has no startxref");
-  std::size_t i = key + 9;
-  while (i < tail.size() && std::isspace(static_cast<unsigned char>(tail[i]))) ++i;
-  std::size_t offset = 0, digits = 0;
-  for (; i < tail.size() && std::isdigit(static_cast<unsigned char>(tail[i])); ++i, ++digits)
-    offset = offset * 10 + static_cast<std::size_t>(tail[i] - '0');
-  if (digits == 0) throw std::runtime_error("PDF file: Cairo's startxref has no offset");
-  if (tail.back() != '\n' && tail.back() != '\r') w.write("\n", 1);
-  return offset;
-}
-
-std::string header(QPDFObjGen id) {
-  return std::to_string(id.getObj()) + " " + std::to_string(id.getGen()) + " obj\n";
-}
-
-// A stream made here holds its data unfiltered; it goes out compressed.
-void write_stream(QPDFObjectHandle s, CountingWriter& w) {
-  auto raw = s.getRawStreamData();
-  Pl_Buffer collected("compressed");
-  Pl_Flate flate("flate", &collected, Pl_Flate::a_deflate);
-  flate.write(raw->getBuffer(), raw->getSize());
-  flate.finish();
-  auto data = collected.getBufferSharedPointer();
-  QPDFObjectHandle dict = s.getDict().shallowCopy();
-  dict.replaceKey("/Length", QPDFObjectHandle::newInteger(static_cast<long long>(data->getSize())));
-  dict.replaceKey("/Filter", QPDFObjectHandle::newName("/FlateDecode"));
-  dict.removeKey("/DecodeParms");
-  w.write(header(s.getObjGen()) + dict.unparse() + "\nstream\n");
-  w.write(reinterpret_cast<const char*>(data->getBuffer()), data->getSize());
-  w.write("\nendstream\nendobj\n");
+  if (last != '\n' && last != '\r') w.write("\n", 1);
 }
 
 // A cross-reference entry is exactly 20 bytes (ISO 32000-1 §7.5.4).
-std::string xref_entry(std::size_t offset, int generation) {
+std::string xref_entry(std::size_t offset) {
   char row[24];
-  std::snprintf(row, sizeof row, "%010zu %05d n \n", offset, generation);
+  std::snprintf(row, sizeof row, "%010zu 00000 n \n", offset);
   return row;
 }
 
 }  // namespace
 
-void write_incremental_update(QPDF& q, std::FILE* original, const std::set<QPDFObjGen>& changed,
-                              const std::map<QPDFObjGen, std::string>& rewritten, std::ostream& out) {
-  QPDFObjectHandle trailer = q.getTrailer();
-  const long long old_size = trailer.getKey("/Size").isInteger() ? trailer.getKey("/Size").getIntValue() : 0;
-  if (old_size <= 0) throw std::runtime_error("PDF file: Cairo's trailer has no /Size");
+int Update::add(std::string text) {
+  objects_[next_] = std::move(text);
+  return next_++;
+}
 
+int Update::add_stream(std::string_view entries, std::string_view data) {
+  uLongf length = compressBound(static_cast<uLong>(data.size()));
+  std::string packed(length, '\0');
+  if (compress2(reinterpret_cast<Bytef*>(packed.data()), &length, reinterpret_cast<const Bytef*>(data.data()),
+                static_cast<uLong>(data.size()), Z_BEST_COMPRESSION) != Z_OK)
+    throw std::runtime_error("PDF file: cannot compress an embedded stream");
+  packed.resize(length);
+  return add("<< " + std::string(entries) + " /Length " + std::to_string(length) + " /Filter /FlateDecode >>\nstream\n" +
+             packed + "\nendstream");
+}
+
+void Update::write(std::FILE* file, std::ostream& out) const {
   CountingWriter w(out);
-  const std::size_t prev = copy_original(original, w);
+  copy_original(file, w);
 
-  // Objects added since the file was read are numbered on from its /Size.
-  std::set<QPDFObjGen> ids = changed;
-  for (const auto& [id, text] : rewritten) ids.insert(id);
-  int next = static_cast<int>(old_size);
-  for (;; ++next) {
-    QPDFObjectHandle o = q.getObjectByID(next, 0);
-    if (o.isNull()) break;
-    ids.insert(o.getObjGen());
-  }
-
-  std::vector<std::pair<QPDFObjGen, std::size_t>> offsets;
-  for (const QPDFObjGen& id : ids) {
-    offsets.emplace_back(id, w.at());
-    if (auto text = rewritten.find(id); text != rewritten.end()) {
-      w.write(text->second);
-      continue;
-    }
-    QPDFObjectHandle o = q.getObjectByObjGen(id);
-    if (o.isStream()) write_stream(o, w);
-    else w.write(header(id) + o.unparseResolved() + "\nendobj\n");
+  // Every object this update holds belongs to the one generation forme's
+  // files use: Cairo numbers its objects with generation 0.
+  std::vector<std::pair<int, std::size_t>> offsets;
+  for (const auto& [number, text] : objects_) {
+    offsets.emplace_back(number, w.at());
+    w.write(std::to_string(number) + " 0 obj\n");
+    w.write(text);
+    w.write("\nendobj\n");
   }
 
   // One subsection per run of consecutive object numbers.
@@ -123,15 +89,13 @@ void write_incremental_update(QPDF& q, std::FILE* original, const std::set<QPDFO
   std::string xref = "xref\n";
   for (std::size_t i = 0; i < offsets.size();) {
     std::size_t j = i + 1;
-    while (j < offsets.size() && offsets[j].first.getObj() == offsets[j - 1].first.getObj() + 1) ++j;
-    xref += std::to_string(offsets[i].first.getObj()) + " " + std::to_string(j - i) + "\n";
-    for (; i < j; ++i) xref += xref_entry(offsets[i].second, offsets[i].first.getGen());
+    while (j < offsets.size() && offsets[j].first == offsets[j - 1].first + 1) ++j;
+    xref += std::to_string(offsets[i].first) + " " + std::to_string(j - i) + "\n";
+    for (; i < j; ++i) xref += xref_entry(offsets[i].second);
   }
-  QPDFObjectHandle update = trailer.shallowCopy();
-  update.replaceKey("/Size", QPDFObjectHandle::newInteger(next));
-  update.replaceKey("/Prev", QPDFObjectHandle::newInteger(static_cast<long long>(prev)));
-  update.removeKey("/XRefStm");
-  w.write(xref + "trailer\n" + update.unparse() + "\nstartxref\n" + std::to_string(xref_at) + "\n%%EOF\n");
+  std::string t = dict_with(trailer, "/Size", std::to_string(next_));
+  t = dict_with(t, "/Prev", std::to_string(original_.xref_offset()));
+  w.write(xref + "trailer\n" + t + "\nstartxref\n" + std::to_string(xref_at) + "\n%%EOF\n");
 }
 
-}  // namespace forme
+}  // namespace forme::pdf

@@ -1,8 +1,8 @@
 #pragma once
-/// Writes a finished PDF followed by an incremental update (ISO 32000-1
-/// §7.5.6): the original bytes unchanged, then every object that was
-/// changed or added, a cross-reference section for just those objects
-/// (§7.5.4) and a trailer whose /Prev points at the original one.
+/// An incremental update (ISO 32000-1 §7.5.6) to a finished PDF: the
+/// original bytes unchanged, then every object that was changed or added,
+/// a cross-reference section for just those objects (§7.5.4) and a trailer
+/// whose /Prev points at the original one.
 ///
 /// This is how forme adds what Cairo cannot write (see pdf_extras.h) without
 /// rewriting the whole file: the cost, in time and memory, follows what was
@@ -10,23 +10,41 @@
 #include <cstdio>
 #include <map>
 #include <ostream>
-#include <set>
 #include <string>
+#include <string_view>
 
-// qpdf 11: use std::shared_ptr only, never its older PointerHolder.
-#define POINTERHOLDER_TRANSITION 4
-#include <qpdf/QPDF.hh>
+#include "paint/pdf_file_reader.h"
 
-namespace forme {
+namespace forme::pdf {
 
-/// `q` was opened on `original` (whose bytes are copied to `out` first)
-/// and then edited: `changed` names the existing indirect objects whose
-/// content changed; every indirect object numbered past the original
-/// trailer's /Size was added and is written too. New streams are written
-/// compressed. `rewritten` holds objects edited as text, each written as
-/// given (from "N G obj" to "endobj"). Throws std::runtime_error when a write fails or the original
-/// does not end as a PDF file must (`startxref` and an offset).
-void write_incremental_update(QPDF& q, std::FILE* original, const std::set<QPDFObjGen>& changed,
-                              const std::map<QPDFObjGen, std::string>& rewritten, std::ostream& out);
+class Update {
+ public:
+  /// An update to the file `original` reads: new objects are numbered on
+  /// from its /Size.
+  explicit Update(const FileReader& original)
+      : trailer(original.trailer()), original_(original), next_(original.size()) {}
 
-}  // namespace forme
+  /// Replaces object `number`'s text (what goes between "obj" and "endobj").
+  void replace(int number, std::string text) { objects_[number] = std::move(text); }
+  /// A new object; returns its number.
+  int add(std::string text);
+  /// A new stream of `data`, compressed with Flate (§7.4.4), its dictionary
+  /// holding `entries` (e.g. "/Type /EmbeddedFile") beside /Length and
+  /// /Filter; returns its number.
+  int add_stream(std::string_view entries, std::string_view data);
+
+  /// The trailer to write, edited by the caller (e.g. a new /Info); /Size
+  /// and /Prev are set here.
+  std::string trailer;
+
+  /// Copies the original file (`file`, the one read) to `out`, then writes
+  /// the update. Throws std::runtime_error when a read or write fails.
+  void write(std::FILE* file, std::ostream& out) const;
+
+ private:
+  const FileReader& original_;
+  int next_;
+  std::map<int, std::string> objects_;
+};
+
+}  // namespace forme::pdf

@@ -4,7 +4,7 @@
 // description. Every check asks an independent reader:
 //  - poppler's pdfdetach (-list, -saveall) and qpdf --list-attachments read
 //    the embedded files (ISO 32000-1 §7.11.4 embedded file streams, §7.7.4
-//    the /EmbeddedFiles name tree);
+//    the /EmbeddedFiles name tree); coreutils' md5sum checks their /CheckSum;
 //  - poppler's pdfinfo reads Author, Subject, Keywords (§14.3.3 document
 //    information dictionary) and, with -url, the link annotations' URI
 //    actions (§12.5.6.5, §12.6.4.7);
@@ -126,6 +126,16 @@ TEST_CASE("the PDF carries each panel's plotted rows as CSV files that pdfdetach
   CHECK(north.find("\"North, upper\",2,beetle") == std::string::npos);
   CHECK(read_file(dir.file("counts-upper-north.csv")) == north);
   CHECK(read_file(dir.file("counts-south.csv")) == expected_rows("South"));
+  // Each file's /Params holds its size and MD5 (ISO 32000-1 §7.11.4.2 Table
+  // 45), here as coreutils' md5sum computes it of the extracted bytes.
+  const std::string bytes = read_file(pdf);
+  for (const char* name : {"counts-upper-north.csv", "counts-south.csv"}) {
+    auto sum = run("md5sum '" + dir.file(name) + "'");
+    REQUIRE(sum.exit_code == 0);
+    const std::string size = std::to_string(read_file(dir.file(name)).size());
+    INFO(name);
+    CHECK(bytes.find("/Size " + size + " /CheckSum <" + sum.out.substr(0, 32) + ">") != std::string::npos);
+  }
 
   auto check = run("qpdf --check '" + pdf + "'");
   INFO(check.out << check.err);
