@@ -104,20 +104,24 @@ int run_report(int argc, char** argv) {
   std::uint64_t seed = 1;
   app.add_option("--pages", pages, "pages to render")->check(CLI::Range(1, 10'000));
   app.add_option("--seed", seed, "seed for the invented data");
+  std::string keep_in;
+  app.add_option("--keep-in", keep_in,
+                 "write the invented report into this folder and keep it, to render or profile it alone");
   CLI11_PARSE(app, argc, argv);
 
-  ScratchFolder dir("forme-bench-report");
+  ScratchFolder scratch("forme-bench-report");
+  const std::filesystem::path dir = keep_in.empty() ? scratch.path() : std::filesystem::path(keep_in);
   std::string units = "unit\n";
   for (int p = 0; p < pages; ++p) {
     char name[16];
     std::snprintf(name, sizeof name, "U%04d", p + 1);
     units += std::string(name) + "\n";
-    write_text(dir.path() / "data" / (std::string(name) + ".csv"), demand_csv(seed + static_cast<std::uint64_t>(p)));
+    write_text(dir / "data" / (std::string(name) + ".csv"), demand_csv(seed + static_cast<std::uint64_t>(p)));
   }
-  write_text(dir.path() / "units.csv", units);
-  write_text(dir.path() / "page.yaml", kPage);
-  write_text(dir.path() / "report.yaml", kReport);
-  const std::string report = (dir.path() / "report.yaml").string();
+  write_text(dir / "units.csv", units);
+  write_text(dir / "page.yaml", kPage);
+  write_text(dir / "report.yaml", kReport);
+  const std::string report = (dir / "report.yaml").string();
 
   ReportRunOptions o;
   o.font_dir = find_font_dir("/proc/self/exe");
@@ -126,7 +130,7 @@ int run_report(int argc, char** argv) {
   o.times = &times;
 
   // End to end, into a file as the command line writes it.
-  const std::filesystem::path pdf = dir.path() / "report.pdf";
+  const std::filesystem::path pdf = dir / "report.pdf";
   auto t0 = std::chrono::steady_clock::now();
   DiagnosticSink sink;
   {

@@ -18,8 +18,9 @@ namespace forme {
 
 namespace {
 
-// A page composed, with what its stages found.
+// A page composed, with its description and what its stages found.
 struct Composed {
+  PageSpec spec;
   ComposedDocument doc;
   DiagnosticSink found;
 };
@@ -99,7 +100,7 @@ void check_report(const std::string& path, DiagnosticSink& sink, const Limits& l
     DiagnosticSink found;
     std::vector<Table> tables = take_tables(page, cache);
     try {
-      compose_spec(page.spec, tables, fonts, found, limits, nullptr, greyscale);
+      compose_spec(planned_spec(report, page, limits), tables, fonts, found, limits, nullptr, greyscale);
     } catch (...) {
       merge(sink, found);  // the findings before the error, then the error itself
       throw;
@@ -131,17 +132,18 @@ void render_report(const std::string& path, DiagnosticSink& sink, const ReportRu
   std::vector<std::optional<Composed>> early(plan.size());
   std::vector<Placement> at(plan.size());
   for (std::size_t i = 0; i < plan.size(); ++i) {
-    if (!plan[i].spec.data.table_page) continue;
+    if (!plan[i].table_page) continue;
     early[i].emplace();
     t0 = std::chrono::steady_clock::now();
+    early[i]->spec = planned_spec(report, plan[i], o.limits);
     std::vector<Table> tables = take_tables(plan[i], cache);
     times.data += since(t0);
-    early[i]->doc = compose_spec(plan[i].spec, tables, fonts, early[i]->found, o.limits, &times);
+    early[i]->doc = compose_spec(early[i]->spec, tables, fonts, early[i]->found, o.limits, &times);
     at[i].count = early[i]->doc.pages.size();
   }
 
   // Number the pages: contents first, then every page in order.
-  const PageSpec& first_spec = plan.front().spec;
+  const PageSpec first_spec = planned_spec(report, plan.front(), o.limits);
   const PageStyle contents_style = style_for_page(first_spec, fonts);
   const ContentsSheet sheet{first_spec.sheet.width, first_spec.sheet.height, first_spec.sheet.margins};
   std::size_t contents = 0;
@@ -198,14 +200,18 @@ void render_report(const std::string& path, DiagnosticSink& sink, const ReportRu
       paint(page, sheet.margins, contents_style, report.contents_title);
 
   // Later pages are composed on a second thread while earlier ones are
-  // painted. Only that thread uses the table cache once painting starts.
+  // painted. Only that thread builds descriptions and uses the table cache
+  // once painting starts.
   auto compose = [&](std::size_t i) {
     if (early[i]) return std::move(*early[i]);
     Composed c;
+    const auto r0 = std::chrono::steady_clock::now();
+    c.spec = planned_spec(report, plan[i], o.limits);                  // 1b. the page's description
+    times.read += since(r0);
     const auto d0 = std::chrono::steady_clock::now();
     std::vector<Table> tables = take_tables(plan[i], cache);           // 2. load data
     times.data += since(d0);
-    c.doc = compose_spec(plan[i].spec, tables, fonts, c.found, o.limits, &times);  // 2b-6. series, scales, layout, labels
+    c.doc = compose_spec(c.spec, tables, fonts, c.found, o.limits, &times);  // 2b-6. series, scales, layout, labels
     return c;
   };
   // Two pages ahead evens out pages that take longer to compose than to
@@ -214,9 +220,9 @@ void render_report(const std::string& path, DiagnosticSink& sink, const ReportRu
   for (std::size_t i = 0; i < plan.size(); ++i) {
     Composed c = composed.next();
     merge(sink, c.found);
-    const PageStyle style = style_for_page(plan[i].spec, fonts);
+    const PageStyle style = style_for_page(c.spec, fonts);
     for (auto& page : c.doc.pages)
-      paint(page, plan[i].spec.sheet.margins, style, report.sections[plan[i].section].title);
+      paint(page, c.spec.sheet.margins, style, report.sections[plan[i].section].title);
   }
   const auto f0 = std::chrono::steady_clock::now();
   painter->finish();

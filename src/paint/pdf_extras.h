@@ -4,7 +4,8 @@
 ///
 /// Cairo 1.16 cannot embed files, and its link tags are only sound inside a
 /// tagged structure forme does not write, so both are added to the finished
-/// bytes with the qpdf library, as is everything else Cairo cannot say:
+/// bytes as an incremental update (pdf_update.h), as is everything else
+/// Cairo cannot say:
 ///  - the document's /CreationDate (ISO 32000-1 §7.9.4): Cairo 1.16 writes
 ///    a date passed to it without the `D:` prefix the standard requires,
 ///    drops one it cannot parse, and otherwise dates the file by the clock;
@@ -18,8 +19,8 @@
 ///  - each link becomes a /Link annotation (§12.5.6.5) with a URI action
 ///    (§12.6.4.7) and no border, in the page's /Annots array.
 ///  - page labels become the catalog's /PageLabels number tree (§12.4.2).
-/// The file is rewritten whole, with no dates and a document /ID computed
-/// from its content, so the same page still gives the same bytes.
+/// Nothing added depends on the clock, so the same page still gives the
+/// same bytes.
 #include <cstdio>
 #include <optional>
 #include <ostream>
@@ -44,10 +45,10 @@ struct PageLinks {
 /// `D:20240229120000Z`), with `files` embedded, `pages[i]`'s links on page i, and
 /// `figure_alts[k]` as the alternate text (/Alt, ISO 32000-1 §14.9.3) of
 /// the k-th /Figure structure element in document order (Cairo 1.16
-/// writes structure tags without attributes). qpdf reads objects from the
-/// file as it needs them and writes straight to `out`, so a long report is
-/// never held in memory whole. Throws std::runtime_error if qpdf cannot
-/// read or write the file.
+/// writes structure tags without attributes). Objects are read from the
+/// file one at a time as they are needed and the result goes straight to
+/// `out`, so a long report is never held in memory whole. Throws
+/// std::runtime_error if the file cannot be read or written.
 void write_pdf_with_extras(std::FILE* cairo_pdf, const std::string& date, const std::vector<EmbeddedFile>& files,
                            const std::vector<PageLinks>& pages, const std::vector<std::string>& figure_alts,
                            const std::vector<PageLabelRange>& labels, std::ostream& out);

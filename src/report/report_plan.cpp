@@ -18,8 +18,15 @@ const TableSource& source_named(const PageSpec& spec, const std::string& name) {
   throw InputError(spec.loc, "the page has no table '" + name + "'");  // read_report checked this
 }
 
+// What the plan keeps of a page's description.
+void keep(PlannedPage& p, const PageSpec& spec, const ReportPageEntry& entry) {
+  p.title = entry.title.empty() ? spec.title : fill_placeholders(entry.title.value, p.values);
+  p.tables = spec.tables;
+  p.table_page = spec.data.table_page;
+}
+
 void announce(PlannedPage& p, TableCache& cache) {
-  for (const auto& t : p.spec.tables)
+  for (const auto& t : p.tables)
     if (t.name != p.repeat_table) cache.expect(t);
 }
 
@@ -29,14 +36,15 @@ std::vector<PlannedPage> plan_report(const ReportSpec& report, TableCache& cache
   std::vector<PlannedPage> pages;
   for (std::size_t s = 0; s < report.sections.size(); ++s) {
     const ReportSection& section = report.sections[s];
-    for (const ReportPageEntry& entry : section.pages) {
+    for (std::size_t e = 0; e < section.pages.size(); ++e) {
+      const ReportPageEntry& entry = section.pages[e];
       PlaceholderValues values{{"section", section.title}};
       if (!entry.repeat) {
         PlannedPage p;
         p.section = s;
-        p.spec = build_filled(entry.page, values, limits);
-        p.title = entry.title.empty() ? p.spec.title : fill_placeholders(entry.title.value, values);
+        p.entry = e;
         p.values = values;
+        keep(p, build_filled(entry.page, values, limits), entry);
         announce(p, cache);
         pages.push_back(std::move(p));
         continue;
@@ -54,9 +62,9 @@ std::vector<PlannedPage> plan_report(const ReportSpec& report, TableCache& cache
         values[r.column.value] = v;
         PlannedPage p;
         p.section = s;
-        p.spec = build_filled(entry.page, values, limits);
-        p.title = entry.title.empty() ? p.spec.title : fill_placeholders(entry.title.value, values);
+        p.entry = e;
         p.values = values;
+        keep(p, build_filled(entry.page, values, limits), entry);
         p.repeat_table = r.table.value;
         auto part = parts.find(v);
         p.rows = std::move(part->second);
@@ -72,9 +80,13 @@ std::vector<PlannedPage> plan_report(const ReportSpec& report, TableCache& cache
   return pages;
 }
 
+PageSpec planned_spec(const ReportSpec& report, const PlannedPage& page, const Limits& limits) {
+  return build_filled(report.sections[page.section].pages[page.entry].page, page.values, limits);
+}
+
 std::vector<Table> take_tables(PlannedPage& page, TableCache& cache) {
   std::vector<Table> tables;
-  for (const auto& t : page.spec.tables) {
+  for (const auto& t : page.tables) {
     if (t.name == page.repeat_table && page.rows) {
       tables.push_back(std::move(*page.rows));
       page.rows.reset();
