@@ -1,6 +1,7 @@
 #include "cli/report_job.h"
 
 #include <chrono>
+#include <map>
 #include <sstream>
 
 #include "base/lookahead.h"
@@ -129,17 +130,17 @@ void render_report(const std::string& path, DiagnosticSink& sink, const ReportRu
   times.read += since(t0);
 
   // A page followed by table pages is composed now, to count them.
-  std::vector<std::optional<Composed>> early(plan.size());
+  std::map<std::size_t, Composed> early;  // by plan index; few pages have table pages
   std::vector<Placement> at(plan.size());
   for (std::size_t i = 0; i < plan.size(); ++i) {
     if (!plan[i].table_page) continue;
-    early[i].emplace();
+    Composed& c = early[i];
     t0 = std::chrono::steady_clock::now();
-    early[i]->spec = planned_spec(report, plan[i], o.limits);
+    c.spec = planned_spec(report, plan[i], o.limits);
     std::vector<Table> tables = take_tables(plan[i], cache);
     times.data += since(t0);
-    early[i]->doc = compose_spec(early[i]->spec, tables, fonts, early[i]->found, o.limits, &times);
-    at[i].count = early[i]->doc.pages.size();
+    c.doc = compose_spec(c.spec, tables, fonts, c.found, o.limits, &times);
+    at[i].count = c.doc.pages.size();
   }
 
   // Number the pages: contents first, then every page in order.
@@ -203,7 +204,7 @@ void render_report(const std::string& path, DiagnosticSink& sink, const ReportRu
   // painted. Only that thread builds descriptions and uses the table cache
   // once painting starts.
   auto compose = [&](std::size_t i) {
-    if (early[i]) return std::move(*early[i]);
+    if (auto e = early.find(i); e != early.end()) return std::move(e->second);
     Composed c;
     const auto r0 = std::chrono::steady_clock::now();
     c.spec = planned_spec(report, plan[i], o.limits);                  // 1b. the page's description

@@ -163,8 +163,7 @@ std::string resolve(const pdf::FileReader& file, std::string_view value) {
 // the elements of every page in drawing order. Each /Figure gets its /Alt
 // (§14.9.3), the k-th figure the k-th text. Elements are read one by one
 // from the file, so a long report's thousands of them are never all held.
-void add_figure_alts(const pdf::FileReader& file, pdf::Update& update, const Catalog& catalog,
-                     const std::vector<std::string>& alts) {
+void add_figure_alts(const pdf::FileReader& file, pdf::Update& update, const Catalog& catalog, TextSpool& alts) {
   const auto root = dict_value(catalog.text, "/StructTreeRoot");
   if (!root) return;
   std::string node = resolve(file, *root);
@@ -179,6 +178,7 @@ void add_figure_alts(const pdf::FileReader& file, pdf::Update& update, const Cat
       break;
     kids_text = std::string(dict_value(node, "/K").value_or(""));
   }
+  alts.rewind();
   std::size_t next = 0;
   for (std::string_view kid : pdf::array_items(kids_text)) {
     if (next == alts.size()) break;
@@ -186,7 +186,8 @@ void add_figure_alts(const pdf::FileReader& file, pdf::Update& update, const Cat
     if (!number) continue;
     const std::string element = file.object(*number);
     if (!is_figure(element)) continue;
-    update.replace(*number, dict_with(element, "/Alt", pdf::text_string(alts[next++])));
+    update.replace(*number, dict_with(element, "/Alt", pdf::text_string(alts.next())));
+    ++next;
   }
 }
 
@@ -205,7 +206,7 @@ std::string label_tree(const std::vector<PageLabelRange>& labels) {
 }  // namespace
 
 void write_pdf_with_extras(std::FILE* cairo_pdf, const std::string& date, const std::vector<EmbeddedFile>& files,
-                           const std::vector<PageLinks>& pages, const std::vector<std::string>& figure_alts,
+                           const std::vector<PageLinks>& pages, TextSpool& figure_alts,
                            const std::vector<PageLabelRange>& labels, std::ostream& out) {
   try {
     const pdf::FileReader file(cairo_pdf);
@@ -224,7 +225,7 @@ void write_pdf_with_extras(std::FILE* cairo_pdf, const std::string& date, const 
 
     if (!files.empty()) embed(file, update, catalog, files);
     edit_pages(file, update, catalog, pages);
-    if (!figure_alts.empty()) add_figure_alts(file, update, catalog, figure_alts);
+    if (figure_alts.size() > 0) add_figure_alts(file, update, catalog, figure_alts);
     if (!labels.empty()) catalog.text = dict_with(catalog.text, "/PageLabels", label_tree(labels));
     if (catalog.text != original_catalog) update.replace(catalog.number, catalog.text);
 

@@ -29,6 +29,7 @@
 
 #include "paint/display_list.h"
 #include "paint/painter.h"
+#include "paint/temp_spool.h"
 
 namespace forme {
 
@@ -43,14 +44,14 @@ struct PageLinks {
 /// Reads the PDF Cairo wrote to `cairo_pdf` (read from its start, left
 /// open) and writes it to `out` dated `date` (a PDF date string such as
 /// `D:20240229120000Z`), with `files` embedded, `pages[i]`'s links on page i, and
-/// `figure_alts[k]` as the alternate text (/Alt, ISO 32000-1 §14.9.3) of
+/// the k-th string of `figure_alts` as the alternate text (/Alt, ISO 32000-1 §14.9.3) of
 /// the k-th /Figure structure element in document order (Cairo 1.16
 /// writes structure tags without attributes). Objects are read from the
 /// file one at a time as they are needed and the result goes straight to
 /// `out`, so a long report is never held in memory whole. Throws
 /// std::runtime_error if the file cannot be read or written.
 void write_pdf_with_extras(std::FILE* cairo_pdf, const std::string& date, const std::vector<EmbeddedFile>& files,
-                           const std::vector<PageLinks>& pages, const std::vector<std::string>& figure_alts,
+                           const std::vector<PageLinks>& pages, TextSpool& figure_alts,
                            const std::vector<PageLabelRange>& labels, std::ostream& out);
 
 }  // namespace forme

@@ -17,6 +17,7 @@
 #include "paint/painter.h"
 #include "paint/pdf_dates.h"
 #include "paint/pdf_extras.h"
+#include "paint/temp_spool.h"
 
 namespace forme {
 
@@ -24,23 +25,6 @@ namespace {
 
 // A temporary file in $TMPDIR (else /tmp) that has no name: removed from
 // the folder at once, it goes away when closed, even if forme is killed.
-std::FILE* anonymous_temp_file() {
-  const char* env = std::getenv("TMPDIR");
-  const std::string dir = env && *env ? env : "/tmp";
-  std::string path = dir + "/forme-pdf-XXXXXX";
-  const int fd = ::mkstemp(path.data());
-  if (fd < 0)
-    throw InputError(SourceLoc{dir}, std::string("cannot create a temporary file for the PDF: ") + std::strerror(errno),
-                     "set TMPDIR to a writable folder");
-  ::unlink(path.c_str());
-  std::FILE* f = ::fdopen(fd, "w+b");
-  if (!f) {
-    ::close(fd);
-    throw std::runtime_error("PDF file: cannot open a temporary file");
-  }
-  return f;
-}
-
 class PdfPainter final : public Painter {
  public:
   PdfPainter(std::ostream& out, const PaintOptions& options)
@@ -119,7 +103,7 @@ class PdfPainter final : public Painter {
         cairo_tag_begin(cr_, "Figure", "");
         for (; i < page.figures[f].end; ++i) draw_item(cr_, page.items[i]);
         cairo_tag_end(cr_, "Figure");
-        alts_.push_back(page.figures[f].alt);
+        alts_.push(page.figures[f].alt);
         ++f;
         continue;
       }
@@ -161,7 +145,7 @@ class PdfPainter final : public Painter {
 
   std::ostream& out_;
   std::vector<PageLinks> links_;  ///< each painted page's links, in page order
-  std::vector<std::string> alts_;  ///< each figure's alternate text, in document order
+  TextSpool alts_;  ///< each figure's alternate text, in document order, kept on disk until finish
   std::FILE* spool_ = nullptr;  ///< Cairo's output, finished before it reaches out_
   PaintOptions options_;
   std::string date_;  ///< the document's creation date, "D:YYYYMMDDHHmmSSZ"
