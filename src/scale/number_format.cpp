@@ -196,4 +196,23 @@ int decimals_for_step(double step) {
   return std::max(0, 1 - order);
 }
 
+std::string format_value(double v, const NumberFormat& f) {
+  if (f.decimals >= 0 || !std::isfinite(v) || v == 0 || f.style == NumberFormat::Style::power_of_ten)
+    return format_number(v, f);
+  // The magnitude as printed: percent of a fraction is a hundred times it;
+  // an SI mantissa keeps the significant digits of the value itself.
+  const double shown = std::abs(v) * (f.style == NumberFormat::Style::fraction_percent ? 100.0 : 1.0);
+  const int lead = static_cast<int>(std::floor(std::log10(shown)));  // power of the leading digit
+  int places = 2 - lead;  // decimals of `shown` that keep three significant digits
+  if (f.style != NumberFormat::Style::si) places = std::max(places, 0);
+  const double scale = std::pow(10.0, places);
+  if (!std::isfinite(scale) || scale == 0) return format_number(v, f);
+  const double rounded = std::round(shown * scale) / scale;  // half away from zero
+  if (f.style != NumberFormat::Style::fraction_percent) return format_number(std::copysign(rounded, v), f);
+  // Already in percent: dividing by 100 again would bring back binary noise.
+  NumberFormat as_percent = f;
+  as_percent.style = NumberFormat::Style::percent;
+  return format_number(std::copysign(rounded, v), as_percent);
+}
+
 }  // namespace forme

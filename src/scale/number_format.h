@@ -42,6 +42,14 @@ struct NumberFormat {
 /// ticks lines up: 0, 0.5×10³⁰⁸, 1.0×10³⁰⁸ (zero stays "0").
 std::string format_number(double v, const NumberFormat& f);
 
+/// Formats one data value written beside its mark (a value label), in the
+/// axis's style. With fixed decimals, exactly as format_number. Otherwise
+/// to three significant digits of the number as printed (common practice
+/// for labels read at a glance), never dropping digits left of the point
+/// in plain and percent styles: 46.449 → "46.4", 1,234.5 → "1,235",
+/// 0.04567 → "0.0457", 47 → "47", and in SI 46,449 → "46.4k".
+std::string format_value(double v, const NumberFormat& f);
+
 /// The style an axis takes when its author chose none: plain, unless the
 /// largest tick is so large (≥ 10^15) or so small (< 10^-5) that plain
 /// digits would run to many characters; then power of ten, against the

@@ -67,7 +67,7 @@ void draw_stacked_bar_marks(const MarkContext& ctx, DisplayPage& page) {
       if (!ctx.data.spec->value_labels || v == 0) continue;
       ShapeOptions o;
       o.tabular_figures = true;
-      ShapedText t = shape_text(format_number(v, f.y.format), st.fonts.regular, st.label_size(), o);
+      ShapedText t = shape_text(format_value(v, f.y.format), st.fonts.regular, st.label_size(), o);
       const Rgb ink = ink_on(colour, st);
       const bool fits = t.width + 2 * pad <= r.w && lh + pad <= r.h && meets(contrast_ratio(ink, colour), 4.5);
       if (fits) {

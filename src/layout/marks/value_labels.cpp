@@ -12,7 +12,7 @@ Rgb ink_on(const Rgb& fill, const PageStyle& st) {
 ValuePlacement add_value_label(const BarValue& b, const NumberFormat& format, const PageStyle& st, DisplayPage& page) {
   ShapeOptions o;
   o.tabular_figures = true;
-  ShapedText t = shape_text(format_number(b.value, format), st.fonts.regular, st.label_size(), o);
+  ShapedText t = shape_text(format_value(b.value, format), st.fonts.regular, st.label_size(), o);
   const double pad = st.base * 0.35;
   const double lh = PageStyle::line_height(st.fonts.regular, st.label_size());
   const Rgb inside_ink = ink_on(b.fill, st);

@@ -2,7 +2,8 @@
 /// Values written on bars. Inside the bar's end when the measured text fits
 /// with padding and the bar has no fill pattern, in whichever of the page's inks reads best on the fill
 /// (WCAG 2.x contrast ≥ 4.5:1); otherwise just beyond the bar's end, in
-/// text ink on paper. Numbers use the value axis's format.
+/// text ink on paper. Numbers use the value axis's style, to three
+/// significant digits unless the axis fixes its decimals (format_value).
 #include "layout/marks/marks.h"
 
 namespace forme {

@@ -183,3 +183,36 @@ TEST_CASE("axes choose a power of ten only for very large or very small values",
   CHECK(small.decimals == 0);
   CHECK(automatic_format(1e3, 1e2, true).exponent == 3);  // asked for by the author
 }
+
+// Value labels: three significant digits of the number as printed (common
+// practice), integer digits always kept in plain and percent styles; the
+// expected strings are worked by hand from that rule.
+TEST_CASE("format_value writes a label's value to three significant digits, keeping whole digits",
+          "[scale][format]") {
+  using forme::format_value;
+  using forme::NumberFormat;
+  NumberFormat plain;
+  CHECK(format_value(46.449, plain) == "46.4");
+  CHECK(format_value(47, plain) == "47");
+  CHECK(format_value(1234.5, plain) == "1,235");
+  CHECK(format_value(46449, plain) == "46,449");
+  CHECK(format_value(0.04567, plain) == "0.0457");
+  CHECK(format_value(0.5, plain) == "0.5");
+  CHECK(format_value(-2.345, plain) == "\u22122.35");  // half away from zero, minus sign U+2212
+  CHECK(format_value(0, plain) == "0");
+  NumberFormat si;
+  si.style = NumberFormat::Style::si;
+  CHECK(format_value(46449, si) == "46.4k");
+  CHECK(format_value(10734, si) == "10.7k");
+  CHECK(format_value(999'960, si) == "1M");
+  CHECK(format_value(0.04567, si) == "45.7m");
+  NumberFormat share;
+  share.style = NumberFormat::Style::fraction_percent;
+  CHECK(format_value(0.12345, share) == "12.3%");
+  NumberFormat pct;
+  pct.style = NumberFormat::Style::percent;
+  CHECK(format_value(12.345, pct) == "12.3%");
+  NumberFormat fixed;
+  fixed.decimals = 2;
+  CHECK(format_value(46.449, fixed) == "46.45");  // the author's decimals win
+}
