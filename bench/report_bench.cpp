@@ -3,8 +3,9 @@
 // description for each of N report units (one-page-per); each page is a
 // 3 × 2 grid of line panels (one panel per district, via one-panel-per),
 // each panel with four scenario lines of 120 monthly points, a direct
-// label at each line's end and a callout on a band of months (six per
-// page). Each unit's data are its own CSV file, named through a
+// label at each line's end, each line's highest month marked with its
+// value (24 value labels a page, placed clear of all other text) and a
+// callout on a band of months (six per page). Each unit's data are its own CSV file, named through a
 // placeholder, so memory does not grow with the page count.
 // The data are invented, seeded per unit, and written into a temporary
 // folder before any timing starts. Prints one line:
@@ -78,6 +79,7 @@ constexpr const char* kPage =
     "  series-by: scenario\n"
     "  y-title: Demand\n"
     "  y-unit: GWh\n"
+    "  value-labels: highest\n"
     "  callouts:\n"
     "    - text: Tariff review\n"
     "      from: \"61\"\n"

@@ -84,7 +84,17 @@ void add_scalar(Object& o, const NodeSpec& spec) {
       o.add("pattern", quoted(kLengthPattern));
       break;
     case ScalarType::boolean: o.add("type", quoted("boolean")); break;
-    case ScalarType::choice: o.add("enum", string_array(spec.choices)); break;
+    case ScalarType::choice: {
+      // YAML reads true and false as booleans, so a choice that offers them
+      // lists the JSON booleans too.
+      std::string items = "[";
+      for (std::size_t i = 0; i < spec.choices.size(); ++i) {
+        const std::string_view c = spec.choices[i];
+        items += (i ? ", " : "") + (c == "true" || c == "false" ? std::string(c) : quoted(c));
+      }
+      o.add("enum", items + "]");
+      break;
+    }
   }
 }
 

@@ -133,7 +133,12 @@ struct PanelSpec {
   std::vector<ReferenceLine> references;
   Trend trend = Trend::none;
   AspectRule aspect = AspectRule::fill;
-  bool value_labels = false;  ///< write values on bars
+  bool value_labels = false;  ///< write values on bars; on line panels, at `line_values`
+  /// Line panels: which points of each series have their value written.
+  enum class LineValues { last, highest, lowest, extremes };
+  LineValues line_values = LineValues::last;
+  bool line_values_named = false;  ///< written as a word (last, highest…), which only line panels take
+  SourceLoc value_labels_loc;
   Located label_points_by;    ///< dot panels: column whose text names each point
   Located label_priority;     ///< number column: higher values are labelled first
   std::vector<CalloutSpec> callouts;

@@ -409,7 +409,14 @@ class Builder {
       p.references.clear();
       for (const auto& r : refs) p.references.push_back(reference(r));
     }
-    if (auto v = n["value-labels"]) p.value_labels = v.Scalar() == "true";
+    if (auto v = n["value-labels"]) {
+      using V = PanelSpec::LineValues;
+      const std::string& w = v.Scalar();
+      p.value_labels = w != "false";
+      p.line_values = w == "highest" ? V::highest : w == "lowest" ? V::lowest : w == "extremes" ? V::extremes : V::last;
+      p.line_values_named = w != "true" && w != "false";
+      p.value_labels_loc = doc_.loc(v);
+    }
     if (n["label-points-by"]) p.label_points_by = located(n["label-points-by"]);
     if (n["label-priority"]) p.label_priority = located(n["label-priority"]);
     if (!p.label_priority.empty() && p.label_points_by.empty())
@@ -433,6 +440,9 @@ class Builder {
       for (auto it = w.begin(); it != w.end(); ++it)
         p.where.push_back({located(it->first), located(it->second)});
     }
+    if (p.value_labels && p.line_values_named && p.kind != ChartKind::line)
+      throw InputError(p.value_labels_loc, "value-labels names points of a line, but this is not a line panel",
+                       "write 'value-labels: true' to write the values on bars");
     return p;
   }
 

@@ -60,6 +60,8 @@ struct Schema {
     return n;
   }();
   NodeSpec orientation = choice("portrait or landscape", {"portrait", "landscape"});
+  NodeSpec value_labels = choice("true, false, or for line panels last, highest, lowest or extremes",
+                                 {"true", "false", "last", "highest", "lowest", "extremes"});
   NodeSpec sheet = mapping("the sheet",
       {{"size", &text, false, "A0-A6, B0-B6, letter, legal, tabloid, single-column (89 mm wide), double-column (178 mm wide), or \"WIDTH x HEIGHT\" with units"},
        {"height", &length, false, "single-column and double-column figures: the height (default: as tall as the chart needs)"},
@@ -227,7 +229,7 @@ struct Schema {
        {"references", &references, false, "reference lines: targets, thresholds, averages"},
        {"trend", &trend, false, "dot panels: least-squares trend line, optionally with its equation"},
        {"aspect", &aspect, false, "line panels: fill the cell, or bank the lines to 45 degrees"},
-       {"value-labels", &boolean, false, "bar panels: write each value inside its bar where it fits, else just beyond it; stacked bars: inside each segment where it fits, else left out with a warning"},
+       {"value-labels", &value_labels, false, "bar panels (true): write each value inside its bar where it fits, else just beyond it; stacked bars: inside each segment where it fits, else left out with a warning; line panels: last (or true), highest, lowest or extremes: mark those points of each series and write their values beside them, placed clear of all other text"},
        {"label-points-by", &text, false, "dot panels: a column whose text names each point; names that find no room are left out with a warning"},
        {"label-priority", &text, false, "with label-points-by: a number column; points with higher values are named first"},
        {"callouts", &callouts, false, "notes joined by a leader line to a point, a bar or a stretch of x"},

@@ -10,6 +10,7 @@
 #include "layout/furniture.h"
 #include "layout/grid_shape.h"
 #include "layout/marks/marks.h"
+#include "layout/marks/line_values.h"
 #include "layout/movable_text.h"
 #include "layout/series_looks.h"
 #include "layout/text_items.h"
@@ -229,6 +230,8 @@ DisplayPage layout_page(const PageSpec& spec, const std::vector<PanelData>& pane
     MarkContext ctx{panels[i], f, st, colours, name_series, &warnings};
     ctx.looks = &looks[i];
     draw_marks(ctx, page);
+    if (panels[i].kind == ChartKind::line && panels[i].spec->value_labels)
+      for (PointNameRequest& v : line_value_labels(ctx, page)) moving.names.push_back(std::move(v));
     draw_trend_lines(ctx, page, moving.choices);
     draw_reference_lines(ctx, page, moving.choices);
     draw_axis_labels(f, st, AxisLabelling{shows_x(static_cast<int>(i)), shows_y(c)}, page);

@@ -161,12 +161,17 @@ void place_point_names(const PanelMovables& p, std::size_t panel, const PageStyl
     if (!lp.placed) continue;
     if (lp.leader) draw_leader(off_rim(p.names[i].anchor, lp.leader->to, p.names[i].radius), lp.leader->to, leader_stroke, page);
     const double asc = texts[i].ascent;
-    page.add(TextItem{std::move(texts[i]), {lp.box.x + pad, lp.box.y + pad + asc}, st.ink.text, TextRole::point_label});
+    page.add(TextItem{std::move(texts[i]), {lp.box.x + pad, lp.box.y + pad + asc}, st.ink.text,
+                      p.names[i].is_value ? TextRole::value_label : TextRole::point_label});
   }
   for (int i : r.left_out) {
     const PointNameRequest& n = p.names[static_cast<std::size_t>(i)];
-    warnings.warn(n.loc, "point name '" + n.text + "' left out: no free room near its point",
-                  "give it a higher 'label-priority', shorten the names, or give the panel more room");
+    if (n.is_value)
+      warnings.warn(n.loc, "value label '" + n.text + "' left out: no free room near its point",
+                    "label fewer points (value-labels: last, highest or lowest), or give the panel more room");
+    else
+      warnings.warn(n.loc, "point name '" + n.text + "' left out: no free room near its point",
+                    "give it a higher 'label-priority', shorten the names, or give the panel more room");
   }
 }
 

@@ -29,6 +29,7 @@ struct PointNameRequest {
   std::string text;
   double priority = 1; ///< > 0, higher is named first
   SourceLoc loc;       ///< its table row, for the warning if left out
+  bool is_value = false;  ///< a value label at a point of a line, not a name from the table
 };
 
 struct CalloutRequest {
