@@ -77,6 +77,14 @@ std::vector<PageLabelRange> page_labels(std::size_t front_pages) {
           {front_pages, PageNumberStyle::decimal, static_cast<int>(front_pages) + 1}};
 }
 
+// `n` with leading zeros to as many digits as `largest`, so file names
+// sort in page order.
+std::string padded(std::size_t n, std::size_t largest) {
+  std::string digits = std::to_string(n);
+  const std::size_t width = std::to_string(largest).size();
+  return std::string(width > digits.size() ? width - digits.size() : 0, '0') + digits;
+}
+
 // The report description, read with its pages; every error goes to `sink`
 // and the first is thrown.
 ReportSpec read_report_or_throw(const std::string& path, DiagnosticSink& sink, const Limits& limits) {
@@ -221,6 +229,14 @@ void render_report(const std::string& path, DiagnosticSink& sink, const ReportRu
   for (std::size_t i = 0; i < plan.size(); ++i) {
     Composed c = composed.next();
     merge(sink, c.found);
+    // Each page's plotted rows travel with the report, named by the page
+    // they belong to (panels of repeated pages share titles).
+    const std::string page_number = padded(at[i].first + 1, total);
+    for (EmbeddedFile& f : c.doc.info.attachments) {
+      f.name = "page-" + page_number + "-" + f.name;
+      f.description = "Page " + std::to_string(at[i].first + 1) + ": " + f.description;
+      painter->attach(f);
+    }
     const PageStyle style = style_for_page(c.spec, fonts);
     for (auto& page : c.doc.pages)
       paint(page, c.spec.sheet.margins, style, report.sections[plan[i].section].title);

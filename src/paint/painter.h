@@ -67,6 +67,9 @@ class Painter {
   virtual void paint(const DisplayPage& page) = 0;
   /// Finishes the file; after this the stream holds the complete output.
   virtual void finish() = 0;
+  /// Embeds `file` in the output, beside those of DocumentInfo::attachments
+  /// (PDF only; other formats have nowhere to put it).
+  virtual void attach(const EmbeddedFile& file) { (void)file; }
 };
 
 struct PaintOptions {

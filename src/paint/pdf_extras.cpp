@@ -1,7 +1,5 @@
 #include "paint/pdf_extras.h"
 
-#include <nettle/md5.h>
-
 #include <algorithm>
 #include <cstdio>
 #include <map>
@@ -32,37 +30,17 @@ struct Catalog {
   std::string text;
 };
 
-std::string hex(const unsigned char* bytes, std::size_t n) {
-  std::string out = "<";
-  char pair[4];
-  for (std::size_t i = 0; i < n; ++i) {
-    std::snprintf(pair, sizeof pair, "%02x", bytes[i]);
-    out += pair;
-  }
-  return out + ">";
-}
-
-// The MD5 digest (RFC 1321) an embedded file's /CheckSum holds (§7.11.4.2).
-std::string md5_string(std::string_view data) {
-  md5_ctx ctx;
-  md5_init(&ctx);
-  md5_update(&ctx, data.size(), reinterpret_cast<const std::uint8_t*>(data.data()));
-  unsigned char digest[MD5_DIGEST_SIZE];
-  md5_digest(&ctx, MD5_DIGEST_SIZE, digest);
-  return hex(digest, MD5_DIGEST_SIZE);
-}
-
 // Each file becomes an embedded file stream with its size and checksum,
 // referred to by a file specification listed in the catalog's name tree
 // and its /AF array. No dates: the bytes depend on the data alone.
-void embed(const pdf::FileReader& file, pdf::Update& update, Catalog& catalog, const std::vector<EmbeddedFile>& files) {
+void embed(const pdf::FileReader& file, pdf::Update& update, Catalog& catalog, const AttachmentSpool& files) {
   std::map<std::string, int> by_name;  // a name tree's keys are sorted (§7.9.6); a repeated name keeps its last file
   std::string associated = "[";
-  for (const auto& f : files) {
+  for (const SpooledFile& f : files.files()) {
     std::string entries = "/Type /EmbeddedFile";
     if (!f.mime_type.empty()) entries += " /Subtype " + pdf::name(f.mime_type);
-    entries += " /Params << /Size " + std::to_string(f.bytes.size()) + " /CheckSum " + md5_string(f.bytes) + " >>";
-    const int stream = update.add_stream(entries, f.bytes);
+    entries += " /Params << /Size " + std::to_string(f.size) + " /CheckSum <" + f.md5 + "> >>";
+    const int stream = update.add_spooled_stream(entries, files.file(), f.offset, f.length);
     const std::string ef = std::to_string(stream) + " 0 R";
     std::string spec = "<< /Type /Filespec /F " + pdf::byte_string(f.name) + " /UF " + pdf::text_string(f.name) +
                        " /EF << /F " + ef + " /UF " + ef + " >> /AFRelationship /Data";
@@ -205,7 +183,7 @@ std::string label_tree(const std::vector<PageLabelRange>& labels) {
 
 }  // namespace
 
-void write_pdf_with_extras(std::FILE* cairo_pdf, const std::string& date, const std::vector<EmbeddedFile>& files,
+void write_pdf_with_extras(std::FILE* cairo_pdf, const std::string& date, const AttachmentSpool& files,
                            const std::vector<PageLinks>& pages, TextSpool& figure_alts,
                            const std::vector<PageLabelRange>& labels, std::ostream& out) {
   try {
@@ -223,7 +201,7 @@ void write_pdf_with_extras(std::FILE* cairo_pdf, const std::string& date, const 
     catalog.text = file.object(*root);
     const std::string original_catalog = catalog.text;
 
-    if (!files.empty()) embed(file, update, catalog, files);
+    if (!files.files().empty()) embed(file, update, catalog, files);
     edit_pages(file, update, catalog, pages);
     if (figure_alts.size() > 0) add_figure_alts(file, update, catalog, figure_alts);
     if (!labels.empty()) catalog.text = dict_with(catalog.text, "/PageLabels", label_tree(labels));

@@ -28,6 +28,7 @@
 #include <vector>
 
 #include "paint/display_list.h"
+#include "paint/attachment_spool.h"
 #include "paint/painter.h"
 #include "paint/temp_spool.h"
 
@@ -50,7 +51,7 @@ struct PageLinks {
 /// file one at a time as they are needed and the result goes straight to
 /// `out`, so a long report is never held in memory whole. Throws
 /// std::runtime_error if the file cannot be read or written.
-void write_pdf_with_extras(std::FILE* cairo_pdf, const std::string& date, const std::vector<EmbeddedFile>& files,
+void write_pdf_with_extras(std::FILE* cairo_pdf, const std::string& date, const AttachmentSpool& files,
                            const std::vector<PageLinks>& pages, TextSpool& figure_alts,
                            const std::vector<PageLabelRange>& labels, std::ostream& out);
 

@@ -12,6 +12,7 @@
 #include <string_view>
 
 #include "base/diagnostic.h"
+#include "paint/attachment_spool.h"
 #include "paint/cairo_stream.h"
 #include "paint/draw_cairo.h"
 #include "paint/painter.h"
@@ -30,7 +31,9 @@ class PdfPainter final : public Painter {
   PdfPainter(std::ostream& out, const PaintOptions& options)
       : out_(out),
         options_(options),
-        date_(pdf_date_utc(options.info.creation_time.value_or(static_cast<std::int64_t>(std::time(nullptr))))) {}
+        date_(pdf_date_utc(options.info.creation_time.value_or(static_cast<std::int64_t>(std::time(nullptr))))) {
+    for (const auto& f : options.info.attachments) attachments_.add(f);
+  }
   ~PdfPainter() override {
     if (cr_) cairo_destroy(cr_);
     if (surface_) cairo_surface_destroy(surface_);
@@ -69,6 +72,8 @@ class PdfPainter final : public Painter {
     check_cairo(cairo_status(cr_), "PDF page");
   }
 
+  void attach(const EmbeddedFile& file) override { attachments_.add(file); }
+
   void finish() override {
     if (!surface_) return;
     cairo_tag_end(cr_, "Document");
@@ -80,7 +85,7 @@ class PdfPainter final : public Painter {
     cairo_surface_destroy(surface_);
     surface_ = nullptr;
     if (std::fflush(spool_) != 0 || std::ferror(spool_)) throw std::runtime_error("PDF file: temporary file write failed");
-    write_pdf_with_extras(spool_, date_, options_.info.attachments, links_, alts_,
+    write_pdf_with_extras(spool_, date_, attachments_, links_, alts_,
                           options_.info.page_labels, out_);
     if (!out_) throw std::runtime_error("PDF file: write failed");
   }
@@ -145,6 +150,7 @@ class PdfPainter final : public Painter {
 
   std::ostream& out_;
   std::vector<PageLinks> links_;  ///< each painted page's links, in page order
+  AttachmentSpool attachments_;  ///< compressed, on disk until finish
   TextSpool alts_;  ///< each figure's alternate text, in document order, kept on disk until finish
   std::FILE* spool_ = nullptr;  ///< Cairo's output, finished before it reaches out_
   PaintOptions options_;

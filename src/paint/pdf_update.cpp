@@ -1,7 +1,6 @@
 #include "paint/pdf_update.h"
 
-#include <zlib.h>
-
+#include <algorithm>
 #include <stdexcept>
 #include <string>
 #include <utility>
@@ -45,6 +44,18 @@ void copy_original(std::FILE* original, CountingWriter& w) {
   if (last != '\n' && last != '\r') w.write("\n", 1);
 }
 
+// Copies `length` bytes from `offset` in `file` to `w`.
+void copy_range(std::FILE* file, long offset, std::size_t length, CountingWriter& w) {
+  if (std::fseek(file, offset, SEEK_SET) != 0) throw std::runtime_error("PDF file: cannot read a temporary file back");
+  std::vector<char> buffer(1 << 16);
+  while (length > 0) {
+    const std::size_t n = std::fread(buffer.data(), 1, std::min(length, buffer.size()), file);
+    if (n == 0) throw std::runtime_error("PDF file: cannot read a temporary file back");
+    w.write(buffer.data(), n);
+    length -= n;
+  }
+}
+
 // A cross-reference entry is exactly 20 bytes (ISO 32000-1 §7.5.4).
 std::string xref_entry(std::size_t offset) {
   char row[24];
@@ -59,15 +70,11 @@ int Update::add(std::string text) {
   return next_++;
 }
 
-int Update::add_stream(std::string_view entries, std::string_view data) {
-  uLongf length = compressBound(static_cast<uLong>(data.size()));
-  std::string packed(length, '\0');
-  if (compress2(reinterpret_cast<Bytef*>(packed.data()), &length, reinterpret_cast<const Bytef*>(data.data()),
-                static_cast<uLong>(data.size()), Z_BEST_COMPRESSION) != Z_OK)
-    throw std::runtime_error("PDF file: cannot compress an embedded stream");
-  packed.resize(length);
-  return add("<< " + std::string(entries) + " /Length " + std::to_string(length) + " /Filter /FlateDecode >>\nstream\n" +
-             packed + "\nendstream");
+int Update::add_spooled_stream(std::string_view entries, std::FILE* spool, long offset, std::size_t length) {
+  const int number = add("<< " + std::string(entries) + " /Length " + std::to_string(length) +
+                         " /Filter /FlateDecode >>\nstream\n");
+  spooled_[number] = {spool, offset, length};
+  return number;
 }
 
 void Update::write(std::FILE* file, std::ostream& out) const {
@@ -81,6 +88,10 @@ void Update::write(std::FILE* file, std::ostream& out) const {
     offsets.emplace_back(number, w.at());
     w.write(std::to_string(number) + " 0 obj\n");
     w.write(text);
+    if (auto s = spooled_.find(number); s != spooled_.end()) {
+      copy_range(s->second.file, s->second.offset, s->second.length, w);
+      w.write("\nendstream");
+    }
     w.write("\nendobj\n");
   }
 

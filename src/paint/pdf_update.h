@@ -28,10 +28,10 @@ class Update {
   void replace(int number, std::string text) { objects_[number] = std::move(text); }
   /// A new object; returns its number.
   int add(std::string text);
-  /// A new stream of `data`, compressed with Flate (§7.4.4), its dictionary
-  /// holding `entries` (e.g. "/Type /EmbeddedFile") beside /Length and
-  /// /Filter; returns its number.
-  int add_stream(std::string_view entries, std::string_view data);
+  /// A new stream whose `length` bytes, already Flate-compressed, lie at
+  /// `offset` in `spool`; they are copied from there when the update is
+  /// written, never held here. Returns its number.
+  int add_spooled_stream(std::string_view entries, std::FILE* spool, long offset, std::size_t length);
 
   /// The trailer to write, edited by the caller (e.g. a new /Info); /Size
   /// and /Prev are set here.
@@ -44,7 +44,13 @@ class Update {
  private:
   const FileReader& original_;
   int next_;
+  struct Spooled {
+    std::FILE* file;
+    long offset;
+    std::size_t length;
+  };
   std::map<int, std::string> objects_;
+  std::map<int, Spooled> spooled_;  ///< data of streams whose text in objects_ ends at "stream" 
 };
 
 }  // namespace forme::pdf

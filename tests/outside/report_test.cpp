@@ -14,6 +14,7 @@
 #include <catch2/catch.hpp>
 
 #include <algorithm>
+#include <map>
 #include <set>
 #include <sstream>
 #include <string>
@@ -249,5 +250,59 @@ TEST_CASE("every report under layouts renders with no two lines of text overlapp
     }
     auto check = run("qpdf --check '" + pdf + "'");
     CHECK(check.exit_code == 0);
+  }
+}
+
+TEST_CASE("a report carries each page's plotted rows, named by page, as pdfdetach extracts them",
+          "[outside][report][complete]") {
+  REQUIRE(have_tool("pdfdetach"));
+  TempDir dir;
+  const std::string pdf = render_report(dir, "r.pdf");
+  const auto stations = stations_sorted();
+  // The overview has a panel per station, each station page one panel, and
+  // the rain chart one: ISO 32000-1 §7.11.4 embedded files, one per panel.
+  auto list = run("pdfdetach -list '" + pdf + "'");
+  REQUIRE(list.exit_code == 0);
+  CHECK(list.out.find(std::to_string(2 * stations.size() + 1) + " embedded files") != std::string::npos);
+  auto save = run("cd '" + dir.path() + "' && pdfdetach -saveall '" + pdf + "'");
+  REQUIRE(save.exit_code == 0);
+
+  // Station k is on page 3 + k (after the contents and the overview). Its
+  // file holds exactly that station's (pump, month, hours) rows of hours.csv.
+  std::istringstream in(read_file(kDir + "/hours.csv"));
+  std::string line;
+  std::getline(in, line);
+  std::map<std::string, std::multiset<std::string>> rows_by_station;
+  while (std::getline(in, line)) {
+    if (line.empty()) continue;
+    const std::size_t comma = line.find(',');
+    rows_by_station[line.substr(0, comma)].insert(line.substr(comma + 1));
+  }
+  for (std::size_t k = 0; k < stations.size(); ++k) {
+    const std::string file = dir.file("page-" + std::to_string(3 + k) + "-hours-panel-1.csv");
+    INFO(file);
+    auto got = lines_of(read_file(file));
+    for (auto& l : got)  // RFC 4180 ends records with CRLF
+      if (!l.empty() && l.back() == '\r') l.pop_back();
+    REQUIRE(!got.empty());
+    // Columns as the file names them, so their order is the file's business.
+    const auto header = got.front();
+    std::vector<std::string> names;
+    std::istringstream h(header);
+    for (std::string c; std::getline(h, c, ',');) names.push_back(c);
+    auto column = [&](const std::string& n) {
+      return static_cast<std::size_t>(std::find(names.begin(), names.end(), n) - names.begin());
+    };
+    const std::size_t pump = column("pump"), month = column("month"), hours = column("hours");
+    REQUIRE(std::max({pump, month, hours}) < names.size());
+    std::multiset<std::string> seen;
+    for (std::size_t r = 1; r < got.size(); ++r) {
+      std::vector<std::string> cells;
+      std::istringstream c(got[r]);
+      for (std::string cell; std::getline(c, cell, ',');) cells.push_back(cell);
+      if (cells.size() < names.size()) continue;
+      seen.insert(cells[pump] + "," + cells[month] + "," + cells[hours]);
+    }
+    CHECK(seen == rows_by_station[stations[k]]);
   }
 }

@@ -10,6 +10,7 @@
 #include <stdexcept>
 #include <string>
 
+#include "paint/attachment_spool.h"
 #include "paint/pdf_syntax.h"
 #include "paint/pdf_update.h"
 #include "support/outside_tools.h"
@@ -63,7 +64,10 @@ TEST_CASE("objects are read by their cross-reference entries and an update super
 
   forme::pdf::Update update(reader);
   update.replace(4, forme::pdf::dict_with(reader.object(4), "/CreationDate", "(D:20240229120000Z)"));
-  const int note = update.add_stream("/Type /EmbeddedFile", "week,count\n1,4\n");
+  forme::AttachmentSpool spool;
+  spool.add({"counts.csv", "", "text/csv", "week,count\n1,4\n"});
+  const forme::SpooledFile& f = spool.files().front();
+  const int note = update.add_spooled_stream("/Type /EmbeddedFile", spool.file(), f.offset, f.length);
   CHECK(note == 5);
   std::ostringstream out;
   update.write(file.f, out);
