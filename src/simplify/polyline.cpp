@@ -5,23 +5,14 @@
 #include <cstddef>
 #include <utility>
 
+#include "simplify/peucker.h"
+
 namespace forme {
 
 namespace {
 
 constexpr double kRunShare = 0.7;       // of the tolerance, for pass 1
 constexpr double kPeuckerShare = 0.25;  // of the tolerance, for pass 2
-constexpr std::size_t kStretch = 1024;  // pass 2 works on at most this many points at once
-
-/// Squared distance from p to the segment ab (to a itself when a == b).
-double segment_distance2(Point p, Point a, Point b) {
-  const double dx = b.x - a.x, dy = b.y - a.y;
-  const double len2 = dx * dx + dy * dy;
-  double t = 0;
-  if (len2 > 0) t = std::clamp(((p.x - a.x) * dx + (p.y - a.y) * dy) / len2, 0.0, 1.0);
-  const double ex = a.x + t * dx - p.x, ey = a.y + t * dy - p.y;
-  return ex * ex + ey * ey;
-}
 
 /// Pass 1: indices kept from each run of x-spread below w.
 std::vector<std::size_t> run_extremes(std::span<const Point> pts, double w) {
@@ -70,44 +61,18 @@ std::vector<Point> simplify_polyline(std::span<const Point> pts, double toleranc
   const std::vector<std::size_t> idx = run_extremes(pts, kRunShare * tolerance_pt);
   const std::size_t m = idx.size();
 
-  // Positions in idx that pass 2 must keep: ends, global extremes (pass 1
-  // keeps them; see run_extremes), and a cut every kStretch positions.
-  std::vector<char> kept(m, 0);
-  kept.front() = kept.back() = 1;
-  for (std::size_t k = 0; k < m; k += kStretch) kept[k] = 1;
+  // Positions in idx that pass 2 must keep: the global extremes (pass 1
+  // keeps them; see run_extremes).
+  std::vector<char> forced(m, 0);
   for (std::size_t e : global_extremes(pts)) {
     auto at = std::lower_bound(idx.begin(), idx.end(), e);
-    if (at != idx.end() && *at == e) kept[static_cast<std::size_t>(at - idx.begin())] = 1;
+    if (at != idx.end() && *at == e) forced[static_cast<std::size_t>(at - idx.begin())] = 1;
   }
-
-  // Pass 2: Douglas–Peucker on each stretch between forced positions.
-  const double limit2 = (kPeuckerShare * tolerance_pt) * (kPeuckerShare * tolerance_pt);
-  std::vector<std::pair<std::size_t, std::size_t>> stack;
-  std::size_t a = 0;
-  for (std::size_t b = 1; b < m; ++b) {
-    if (!kept[b]) continue;
-    stack.emplace_back(a, b);
-    while (!stack.empty()) {
-      auto [lo, hi] = stack.back();
-      stack.pop_back();
-      double worst = -1;
-      std::size_t at = lo;
-      for (std::size_t k = lo + 1; k < hi; ++k) {
-        const double d2 = segment_distance2(pts[idx[k]], pts[idx[lo]], pts[idx[hi]]);
-        if (d2 > worst) worst = d2, at = k;
-      }
-      if (worst > limit2) {
-        kept[at] = 1;
-        stack.emplace_back(lo, at);
-        stack.emplace_back(at, hi);
-      }
-    }
-    a = b;
-  }
+  const std::vector<std::size_t> kept = peucker(pts, idx, std::move(forced), kPeuckerShare * tolerance_pt);
 
   std::vector<Point> out;
-  for (std::size_t k = 0; k < m; ++k)
-    if (kept[k]) out.push_back(pts[idx[k]]);
+  out.reserve(kept.size());
+  for (std::size_t k : kept) out.push_back(pts[k]);
   return out;
 }
 
