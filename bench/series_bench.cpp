@@ -2,11 +2,14 @@
 // PDF in memory. The data are invented: a seeded random walk of a sensor
 // reading against a sample number, written as page.yaml + CSV into a
 // temporary folder. Prints one line:
-//   points=N wall_s=… compose_s=… paint_s=… kb=… peak_mb=…
+//   points=N drawn=… wall_s=… compose_s=… paint_s=… kb=… peak_mb=…
+// drawn: points left on the series line after thinning.
 // wall_s: render_to_bytes end to end (read, load, scale, lay out, paint);
 // compose_s and paint_s: the same page again, split at the display list.
 // peak_mb: the process's peak resident set (getrusage), data writing included.
+// --out FILE also writes the PDF, to look at or take apart.
 #include <CLI/CLI.hpp>
+#include <algorithm>
 #include <chrono>
 #include <cmath>
 #include <cstdint>
@@ -63,8 +66,10 @@ int run_series(int argc, char** argv) {
   CLI::App app{"one line panel of N points rendered to PDF in memory", "forme-bench series"};
   std::size_t points = 100'000;
   std::uint64_t seed = 1;
+  std::string out_path;
   app.add_option("--points", points, "points in the series")->check(CLI::Range(std::size_t{2}, std::size_t{50'000'000}));
   app.add_option("--seed", seed, "seed for the invented data");
+  app.add_option("--out", out_path, "also write the PDF here");
   CLI11_PARSE(app, argc, argv);
 
   ScratchFolder dir("forme-bench-series");
@@ -93,8 +98,13 @@ int run_series(int argc, char** argv) {
   painter->finish();
   const double paint = seconds_since(t0);
 
-  std::printf("points=%zu wall_s=%.3f compose_s=%.3f paint_s=%.3f kb=%.0f peak_mb=%.1f\n", points, wall, compose,
-              paint, static_cast<double>(pdf.size()) / 1024.0, peak_rss_mb());
+  std::size_t drawn = 0;  // the series line is the page's longest path
+  for (const DisplayItem& item : composed.items)
+    if (const auto* path = std::get_if<PathItem>(&item)) drawn = std::max(drawn, path->points.size());
+  if (!out_path.empty()) write_text(out_path, pdf);
+
+  std::printf("points=%zu drawn=%zu wall_s=%.3f compose_s=%.3f paint_s=%.3f kb=%.0f peak_mb=%.1f\n", points, drawn,
+              wall, compose, paint, static_cast<double>(pdf.size()) / 1024.0, peak_rss_mb());
   return 0;
 }
 

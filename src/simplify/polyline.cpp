@@ -3,52 +3,21 @@
 #include <algorithm>
 #include <array>
 #include <cstddef>
-#include <utility>
+#include <cstdint>
+#include <limits>
+
+#include "simplify/cover.h"
+#include "simplify/peucker.h"
+#include "simplify/zigzag.h"
 
 namespace forme {
 
 namespace {
 
-constexpr double kRunShare = 0.7;       // of the tolerance, for pass 1
-constexpr double kPeuckerShare = 0.25;  // of the tolerance, for pass 2
-constexpr std::size_t kStretch = 1024;  // pass 2 works on at most this many points at once
-
-/// Squared distance from p to the segment ab (to a itself when a == b).
-double segment_distance2(Point p, Point a, Point b) {
-  const double dx = b.x - a.x, dy = b.y - a.y;
-  const double len2 = dx * dx + dy * dy;
-  double t = 0;
-  if (len2 > 0) t = std::clamp(((p.x - a.x) * dx + (p.y - a.y) * dy) / len2, 0.0, 1.0);
-  const double ex = a.x + t * dx - p.x, ey = a.y + t * dy - p.y;
-  return ex * ex + ey * ey;
-}
-
-/// Pass 1: indices kept from each run of x-spread below w.
-std::vector<std::size_t> run_extremes(std::span<const Point> pts, double w) {
-  std::vector<std::size_t> keep;
-  const std::size_t n = pts.size();
-  std::size_t start = 0;
-  while (start < n) {
-    std::size_t ix_min = start, ix_max = start, iy_min = start, iy_max = start;
-    std::size_t i = start + 1;
-    for (; i < n; ++i) {
-      const Point p = pts[i];
-      const double lo = std::min(pts[ix_min].x, p.x), hi = std::max(pts[ix_max].x, p.x);
-      if (hi - lo >= w) break;
-      // Strict comparisons: the first of equal extremes is the one kept.
-      if (p.x < pts[ix_min].x) ix_min = i;
-      if (p.x > pts[ix_max].x) ix_max = i;
-      if (p.y < pts[iy_min].y) iy_min = i;
-      if (p.y > pts[iy_max].y) iy_max = i;
-    }
-    std::array<std::size_t, 6> run = {start, ix_min, ix_max, iy_min, iy_max, i - 1};
-    std::sort(run.begin(), run.end());
-    for (std::size_t k = 0; k < run.size(); ++k)
-      if (k == 0 || run[k] != run[k - 1]) keep.push_back(run[k]);
-    start = i;
-  }
-  return keep;
-}
+constexpr double kRunShare = 2.0;  // of the tolerance: the width of pass 1's runs
+// The check measures to 99.99 % of the tolerance: the rest absorbs the
+// rounding of its own arithmetic, far below a millionth of a point.
+constexpr double kCheckShare = 0.9999;
 
 /// The first index of least and greatest x and y over the whole series.
 std::array<std::size_t, 4> global_extremes(std::span<const Point> pts) {
@@ -65,49 +34,26 @@ std::array<std::size_t, 4> global_extremes(std::span<const Point> pts) {
 }  // namespace
 
 std::vector<Point> simplify_polyline(std::span<const Point> pts, double tolerance_pt) {
-  if (!(tolerance_pt > 0) || pts.size() < 3) return {pts.begin(), pts.end()};
+  // The check names points with 32-bit indices.
+  if (!(tolerance_pt > 0) || pts.size() < 3 || pts.size() > std::numeric_limits<std::uint32_t>::max())
+    return {pts.begin(), pts.end()};
 
-  const std::vector<std::size_t> idx = run_extremes(pts, kRunShare * tolerance_pt);
-  const std::size_t m = idx.size();
-
-  // Positions in idx that pass 2 must keep: ends, global extremes (pass 1
-  // keeps them; see run_extremes), and a cut every kStretch positions.
-  std::vector<char> kept(m, 0);
-  kept.front() = kept.back() = 1;
-  for (std::size_t k = 0; k < m; k += kStretch) kept[k] = 1;
-  for (std::size_t e : global_extremes(pts)) {
+  std::vector<std::size_t> idx = zigzag_picks(pts, kRunShare * tolerance_pt);
+  const std::array<std::size_t, 4> extremes = global_extremes(pts);
+  for (std::size_t e : extremes) {
     auto at = std::lower_bound(idx.begin(), idx.end(), e);
-    if (at != idx.end() && *at == e) kept[static_cast<std::size_t>(at - idx.begin())] = 1;
+    if (at == idx.end() || *at != e) idx.insert(at, e);
   }
+  std::vector<char> forced(idx.size(), 0);
+  for (std::size_t e : extremes) forced[static_cast<std::size_t>(std::lower_bound(idx.begin(), idx.end(), e) - idx.begin())] = 1;
 
-  // Pass 2: Douglas–Peucker on each stretch between forced positions.
-  const double limit2 = (kPeuckerShare * tolerance_pt) * (kPeuckerShare * tolerance_pt);
-  std::vector<std::pair<std::size_t, std::size_t>> stack;
-  std::size_t a = 0;
-  for (std::size_t b = 1; b < m; ++b) {
-    if (!kept[b]) continue;
-    stack.emplace_back(a, b);
-    while (!stack.empty()) {
-      auto [lo, hi] = stack.back();
-      stack.pop_back();
-      double worst = -1;
-      std::size_t at = lo;
-      for (std::size_t k = lo + 1; k < hi; ++k) {
-        const double d2 = segment_distance2(pts[idx[k]], pts[idx[lo]], pts[idx[hi]]);
-        if (d2 > worst) worst = d2, at = k;
-      }
-      if (worst > limit2) {
-        kept[at] = 1;
-        stack.emplace_back(lo, at);
-        stack.emplace_back(at, hi);
-      }
-    }
-    a = b;
-  }
+  const double r = kCheckShare * tolerance_pt;
+  std::vector<std::size_t> kept = peucker(pts, idx, std::move(forced), r);
+  kept = ensure_cover(pts, std::move(kept), r);
 
   std::vector<Point> out;
-  for (std::size_t k = 0; k < m; ++k)
-    if (kept[k]) out.push_back(pts[idx[k]]);
+  out.reserve(kept.size());
+  for (std::size_t k : kept) out.push_back(pts[k]);
   return out;
 }
 
