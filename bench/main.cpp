@@ -2,6 +2,7 @@
 #include <cstdio>
 #include <cstring>
 
+#include "base/allocator_tuning.h"
 #include "subcommands.h"
 
 namespace {
@@ -27,6 +28,7 @@ int usage(std::FILE* out) {
 }  // namespace
 
 int main(int argc, char** argv) {
+  forme::tune_allocator();  // as the command line does
   if (argc < 2) return usage(stderr);
   if (std::strcmp(argv[1], "--help") == 0 || std::strcmp(argv[1], "-h") == 0) return usage(stdout);
   for (const Subcommand& s : kSubcommands)

@@ -7,6 +7,7 @@
 #include <iostream>
 #include <optional>
 
+#include "base/allocator_tuning.h"
 #include "base/diagnostic.h"
 #include "cli/colour_commands.h"
 #include "cli/progress_bar.h"
@@ -96,6 +97,7 @@ int make_starter(const std::string& kind, const std::string& dir) {
 }  // namespace
 
 int main(int argc, char** argv) {
+  forme::tune_allocator();
   CLI::App app{"forme: composes print-ready chart pages from a YAML page description and CSV tables."};
   app.set_version_flag("--version", std::string("forme ") + FORME_VERSION);
   app.require_subcommand(1);
