@@ -147,7 +147,11 @@ ComposedDocument compose_spec(PageSpec spec, const std::vector<Table>& tables, c
   }
   if (spec.sheet.height_from_content) spec.sheet.height = content_height(spec, panels, axes, style);
   ComposedDocument doc;
-  doc.pages.push_back(layout_page(spec, panels, axes, style, sink)); // 5-6. lay out, place labels
+  LaidOutPage laid = lay_out_boxes(spec, panels, axes, style, sink);  // 5. lay out boxes
+  lap(&StageTimes::layout);
+  place_movable_text(laid.movables, style, laid.page, sink);          // 6. place labels
+  lap(&StageTimes::place);
+  doc.pages.push_back(std::move(laid.page));
   audit_layout(spec, doc.pages.front(), sink, limits);
   audit_missing_glyphs(spec, doc.pages.front(), sink);
   greyscale = greyscale || spec.greyscale;  // for black-and-white printing

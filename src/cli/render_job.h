@@ -68,10 +68,10 @@ Table load_table(const TableSource& source, const Limits& limits);
 PageStyle style_for_page(const PageSpec& spec, const FontSet& fonts);
 
 /// Wall time spent in each stage, in seconds, summed over the pages of a
-/// run (benchmarks read it). `layout` includes label placement, which runs
-/// inside layout.
+/// run (benchmarks read it). `layout` includes the page audits that follow
+/// it; `place` is stage 6, the movable text placed against the whole page.
 struct StageTimes {
-  double read = 0, data = 0, scales = 0, layout = 0, paint = 0;
+  double read = 0, data = 0, scales = 0, layout = 0, place = 0, paint = 0;
 };
 
 /// Stages 2b-6 for a page already read, with its tables loaded (in the

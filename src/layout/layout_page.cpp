@@ -100,8 +100,8 @@ void draw_callout_band(const Rect& band, DisplayPage& page) {
 
 }  // namespace
 
-DisplayPage layout_page(const PageSpec& spec, const std::vector<PanelData>& panels,
-                        const std::vector<PanelAxes>& axes, const PageStyle& st, DiagnosticSink& warnings) {
+LaidOutPage lay_out_boxes(const PageSpec& spec, const std::vector<PanelData>& panels,
+                          const std::vector<PanelAxes>& axes, const PageStyle& st, DiagnosticSink& warnings) {
   DisplayPage page;
   page.width = spec.sheet.width;
   page.height = spec.sheet.height;
@@ -243,9 +243,14 @@ DisplayPage layout_page(const PageSpec& spec, const std::vector<PanelData>& pane
     }
     page.figures.back().end = page.items.size();
   }
-  // 6. Movable text last, when every fixed text and mark on the page is known.
-  place_movable_text(movables, st, page, warnings);
-  return page;
+  return {std::move(page), std::move(movables)};
+}
+
+DisplayPage layout_page(const PageSpec& spec, const std::vector<PanelData>& panels,
+                        const std::vector<PanelAxes>& axes, const PageStyle& st, DiagnosticSink& warnings) {
+  LaidOutPage laid = lay_out_boxes(spec, panels, axes, st, warnings);
+  place_movable_text(laid.movables, st, laid.page, warnings);
+  return std::move(laid.page);
 }
 
 }  // namespace forme

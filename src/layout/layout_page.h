@@ -7,13 +7,25 @@
 #include "axes/axis.h"
 #include "base/diagnostic.h"
 #include "describe/page_spec.h"
+#include "layout/movable_text.h"
 #include "layout/page_style.h"
 #include "paint/display_list.h"
 #include "series/panel_data.h"
 
 namespace forme {
 
-/// Lays out one page. Problems that make the page unreadable (a grid too
+/// Stage 5 alone: the page with every fixed piece in place, and what stage
+/// 6 must still place (callouts, point names, value labels at points),
+/// which is done last so it sees every other text and mark on the page.
+struct LaidOutPage {
+  DisplayPage page;
+  std::vector<PanelMovables> movables;
+};
+LaidOutPage lay_out_boxes(const PageSpec& spec, const std::vector<PanelData>& panels,
+                          const std::vector<PanelAxes>& axes, const PageStyle& style, DiagnosticSink& warnings);
+
+/// Stages 5 and 6: lays out one page and places its movable text
+/// (place_movable_text). Problems that make the page unreadable (a grid too
 /// small for its panels) throw InputError located in the description.
 DisplayPage layout_page(const PageSpec& spec, const std::vector<PanelData>& panels,
                         const std::vector<PanelAxes>& axes, const PageStyle& style, DiagnosticSink& warnings);
