@@ -103,20 +103,23 @@ std::string FileReader::object(int number) const {
     const std::string entry = read(file_, kEntryBytes);
     if (entry.size() < 18 || entry[17] != 'n') fail(what + " is not in use");
     seek(file_, parse_long(entry.substr(0, 10)));
+    const std::string header = std::to_string(number) + " ";
     std::string text;
     while (text.size() < kLargestObject) {
       const std::string block = read(file_, 4096);
       if (block.empty()) break;
-      // Search from a little before the new block, in case "endobj" straddles the two.
-      const std::size_t from = text.size() > 6 ? text.size() - 6 : 0;
       text += block;
-      const std::size_t end = text.find("endobj", from);
-      if (end == std::string::npos) continue;
-      const std::string header = std::to_string(number) + " ";
       const std::size_t obj = text.find("obj");
-      if (text.compare(0, header.size(), header) != 0 || obj == std::string::npos || obj > end)
-        fail(what + " is not where the cross-reference table says");
-      return text.substr(obj + 3, end - obj - 3);
+      if (obj == std::string::npos) continue;
+      if (text.compare(0, header.size(), header) != 0) fail(what + " is not where the cross-reference table says");
+      // The value first, then "endobj" after it: a string in the value may
+      // hold the word itself (a title such as "endobj notes").
+      const std::string_view body = std::string_view(text).substr(obj + 3);
+      const std::size_t value = first_value_end(body);
+      if (value == std::string_view::npos) continue;  // not all read yet (or malformed: read on to the limit)
+      const std::size_t end = body.find("endobj", value);
+      if (end == std::string_view::npos) continue;
+      return std::string(body.substr(0, end));
     }
     fail(what + " has no endobj");
   }

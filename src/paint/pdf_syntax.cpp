@@ -178,6 +178,12 @@ std::string dict_with(std::string_view text, std::string_view key, std::string_v
   return out;
 }
 
+std::size_t first_value_end(std::string_view text) {
+  const std::size_t i = skip_space(text, 0);
+  if (i >= text.size()) return npos;
+  return value_end(text, i, 0);
+}
+
 std::optional<int> reference(std::string_view value) {
   const std::size_t i = skip_space(value, 0);
   const std::size_t end = value_end(value, i, 0);

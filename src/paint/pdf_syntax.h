@@ -24,6 +24,12 @@ std::optional<std::string_view> dict_value(std::string_view text, std::string_vi
 /// std::runtime_error when `text` holds no well-formed dictionary.
 std::string dict_with(std::string_view text, std::string_view key, std::string_view value);
 
+/// Where the first value of `text` ends (an offset just past it), after any
+/// white space and comments before it; npos when `text` ends before the
+/// value does or the value is malformed. An object's "endobj" is found
+/// after this, never inside a string that merely contains the word.
+std::size_t first_value_end(std::string_view text);
+
 /// The object number of an indirect reference "N G R" (§7.3.10).
 std::optional<int> reference(std::string_view value);
 

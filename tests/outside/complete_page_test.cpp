@@ -250,3 +250,21 @@ TEST_CASE("a source link without a scheme is refused where it is written", "[out
   CHECK(r.err.find(dir.file("page.yaml") + ":3:14: error: 'survey.pellow.example/traps' is not a link a PDF reader "
                    "can follow") == 0);
 }
+
+TEST_CASE("a title that holds the word endobj still gives a sound PDF with that title", "[outside][complete]") {
+  // Found by page_fuzz: forme's reader took the word inside the title's
+  // string for the end of the document information object.
+  REQUIRE(have_tool("pdfinfo"));
+  TempDir dir;
+  write_file(dir.file("t.csv"), "day,value\n2024-01-01,3\n2024-01-02,5\n");
+  write_file(dir.file("page.yaml"), "heading: {title: Notes endobj and more}\ntables: {t: t.csv}\n"
+                                    "panel: {kind: line, x: day, y: value, y-unit: tonnes}\nsource: test\n");
+  const std::string pdf = render(dir, "endobj.pdf", dir.file("page.yaml"));
+  auto info = run("pdfinfo '" + pdf + "'");
+  REQUIRE(info.exit_code == 0);
+  CHECK(info.out.find("Notes endobj and more") != std::string::npos);
+  CHECK(info.out.find("CreationDate:") != std::string::npos);
+  auto check = run("qpdf --check '" + pdf + "'");
+  INFO(check.out << check.err);
+  CHECK(check.exit_code == 0);
+}

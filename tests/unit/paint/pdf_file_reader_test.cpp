@@ -25,7 +25,7 @@ std::string tiny_pdf() {
       "<< /Type /Catalog /Pages 2 0 R >>",
       "<< /Type /Pages /Kids [ 3 0 R ] /Count 1 >>",
       "<< /Type /Page % a comment, as Cairo writes one\n /Parent 2 0 R /MediaBox [ 0 0 200 100 ] >>",
-      "<< /Producer (hand) /CreationDate (20240229120000Z) >>",
+      "<< /Producer (hand) /Title (notes endobj and more) /CreationDate (20240229120000Z) >>",
   };
   for (int i = 0; i < 4; ++i) {
     at.push_back(pdf.size());
@@ -59,6 +59,8 @@ TEST_CASE("objects are read by their cross-reference entries and an update super
   CHECK(reader.size() == 5);
   CHECK(forme::pdf::dict_value(reader.trailer(), "/Root") == "1 0 R");
   CHECK(forme::pdf::dict_value(reader.object(3), "/MediaBox") == "[ 0 0 200 100 ]");
+  // A string holding the word "endobj" does not end the object (found by page_fuzz).
+  CHECK(forme::pdf::dict_value(reader.object(4), "/CreationDate") == "(20240229120000Z)");
   CHECK_THROWS_AS(reader.object(0), std::runtime_error);  // the free list's head
   CHECK_THROWS_AS(reader.object(9), std::runtime_error);
 
