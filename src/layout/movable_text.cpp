@@ -72,7 +72,7 @@ void place_choices(const PanelMovables& p, const PageStyle& st, DisplayPage& pag
     }
     const Rect& box = c.spots[static_cast<std::size_t>(best)];
     const double asc = c.text.ascent;
-    page.add(TextItem{c.text, {box.x, box.y + asc}, c.ink, c.role});
+    page.add(TextItem{c.text, {box.x, box.y + asc}, c.ink, c.role, {}});
   }
 }
 
@@ -119,11 +119,11 @@ void place_callouts(const PanelMovables& p, const PageStyle& st, DisplayPage& pa
       leaders.push_back({req.target, end});
       note_line_marks({req.target, end}, page);
     }
-    page.add(CircleItem{req.target, st.rule_width() * 2.2, st.ink.text, std::nullopt});
+    page.add(CircleItem{req.target, st.rule_width() * 2.2, st.ink.text, std::nullopt, ShapeRole::leader, {}});
     double top = box.y + pad;
     for (auto& l : lines) {
       const double asc = l.ascent;
-      page.add(TextItem{std::move(l), {box.x + pad, top + asc}, st.ink.text, TextRole::callout});
+      page.add(TextItem{std::move(l), {box.x + pad, top + asc}, st.ink.text, TextRole::callout, {}});
       top += lh;
     }
     page.data_marks.push_back(box);
@@ -162,7 +162,7 @@ void place_point_names(const PanelMovables& p, std::size_t panel, const PageStyl
     if (lp.leader) draw_leader(off_rim(p.names[i].anchor, lp.leader->to, p.names[i].radius), lp.leader->to, leader_stroke, page);
     const double asc = texts[i].ascent;
     page.add(TextItem{std::move(texts[i]), {lp.box.x + pad, lp.box.y + pad + asc}, st.ink.text,
-                      p.names[i].is_value ? TextRole::value_label : TextRole::point_label});
+                      p.names[i].is_value ? TextRole::value_label : TextRole::point_label, {}});
   }
   for (int i : r.left_out) {
     const PointNameRequest& n = p.names[static_cast<std::size_t>(i)];

@@ -9,7 +9,7 @@ enum class Align { left, centre, right };
 /// A text item whose baseline starts at x (after alignment) and y.
 inline TextItem text_at(ShapedText t, double x, double baseline, Align a, Rgb colour, TextRole role) {
   double ox = a == Align::left ? x : a == Align::centre ? x - t.width / 2 : x - t.width;
-  return TextItem{std::move(t), {ox, baseline}, colour, role};
+  return TextItem{std::move(t), {ox, baseline}, colour, role, {}};
 }
 
 /// A text item vertically centred on `cy` (centred on the capital height,

@@ -7,6 +7,7 @@
 #include <variant>
 #include <vector>
 
+#include "base/diagnostic.h"
 #include "base/geometry.h"
 #include "colour/rgb.h"
 #include "text/shaped_text.h"
@@ -31,6 +32,18 @@ struct Hatch {
   Rgb ink;
 };
 
+/// What a drawn shape is for. Painters ignore it; the page audit and the
+/// placer read it: text may not lie over data, a leader may cross only
+/// what it points to, a callout box may not cover data.
+enum class ShapeRole {
+  furniture,    ///< rules, axis lines, ticks, backgrounds, swatches
+  grid,         ///< light gridlines text may cross
+  data,         ///< lines, dots, bars, areas, bands of the data
+  reference,    ///< reference and trend lines
+  leader,       ///< a leader line from a label to what it names
+  callout_box,  ///< the paper behind a callout's note
+};
+
 /// A polyline or polygon.
 struct PathItem {
   std::vector<Point> points;
@@ -38,6 +51,8 @@ struct PathItem {
   std::optional<Rgb> fill;
   std::optional<Stroke> stroke;
   std::optional<Hatch> hatch;  ///< closed shapes: pattern over the fill
+  ShapeRole role = ShapeRole::furniture;
+  SourceLoc loc;  ///< the description key or table row it draws, for findings
 };
 
 /// A rectangle filled with `fill`: corners from the top left, clockwise
@@ -55,6 +70,8 @@ struct CircleItem {
   double radius = 1;
   std::optional<Rgb> fill;
   std::optional<Stroke> stroke;
+  ShapeRole role = ShapeRole::data;
+  SourceLoc loc;  ///< the table row or description key it draws, for findings
 };
 
 /// What a piece of text is for; tests and the overlap check use it.
@@ -68,6 +85,7 @@ struct TextItem {
   Point origin;  ///< left end of the baseline
   Rgb colour;
   TextRole role = TextRole::note;
+  SourceLoc loc;  ///< the description key or table row the text comes from; empty: the page
 
   /// The ink-independent box: advance width × (ascent + descent).
   Rect box() const {

@@ -76,7 +76,7 @@ std::vector<DisplayPage> contents_pages(const std::string& title, const std::vec
       const double gap = size * 0.6;
       if (number_left - gap - (text_right + gap) > size * 2) {
         Stroke dots{st.ink.muted, st.rule_width() * 2, {0.01, size * 0.45}, true};
-        page.add(PathItem{{{text_right + gap, baseline}, {number_left - gap, baseline}}, false, std::nullopt, dots, std::nullopt});
+        page.add(PathItem{{{text_right + gap, baseline}, {number_left - gap, baseline}}, false, std::nullopt, dots, std::nullopt, ShapeRole::furniture, {}});
       }
     }
     pages.push_back(std::move(page));

@@ -37,7 +37,7 @@ void draw_dot_marks(const MarkContext& ctx, DisplayPage& page) {
     double first_row_x = f.plot.left();
     for (std::size_t i = 0; i < s.x.size(); ++i) {
       const double r = st.dot_radius() * 1.2;
-      page.add(CircleItem{{f.px(s.x[i]), f.py(s.y[i])}, r, colour, Stroke{st.ink.paper, st.rule_width() * 1.5, {}, false}});
+      page.add(CircleItem{{f.px(s.x[i]), f.py(s.y[i])}, r, colour, Stroke{st.ink.paper, st.rule_width() * 1.5, {}, false}, ShapeRole::data, {}});
       page.data_marks.push_back({f.px(s.x[i]) - r, f.py(s.y[i]) - r, 2 * r, 2 * r});
       if (strip && s.y[i] == 0) first_row_x = f.px(s.x[i]);
     }

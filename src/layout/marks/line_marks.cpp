@@ -51,7 +51,7 @@ void draw_line_marks(const MarkContext& ctx, DisplayPage& page) {
     drawn.push_back(path.points);
     note_line_marks(path.points, page);
     if (path.points.size() == 1) {
-      page.add(CircleItem{path.points[0], st.dot_radius(), colour, std::nullopt});
+      page.add(CircleItem{path.points[0], st.dot_radius(), colour, std::nullopt, ShapeRole::data, {}});
     } else if (!path.points.empty()) {
       page.add(std::move(path));
     }

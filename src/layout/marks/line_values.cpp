@@ -29,7 +29,7 @@ std::vector<PointNameRequest> line_value_labels(const MarkContext& ctx, DisplayP
   for (const auto& s : ctx.data.series) {
     for (std::size_t i : line_value_points(s.y, spec.line_values)) {
       const Point at{f.px(s.x[i]), f.py(s.y[i])};
-      page.add(CircleItem{at, st.dot_radius(), ctx.colours.at(s.name), std::nullopt});
+      page.add(CircleItem{at, st.dot_radius(), ctx.colours.at(s.name), std::nullopt, ShapeRole::data, {}});
       PointNameRequest r;
       r.anchor = at;
       r.radius = st.dot_radius() * 1.2;

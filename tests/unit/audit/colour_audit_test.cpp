@@ -16,7 +16,7 @@ TextItem text(const std::string& s, Rgb colour, double size, Point origin) {
   t.width = size * 2;
   t.ascent = size * 0.8;
   t.descent = size * 0.2;
-  return TextItem{t, origin, colour, TextRole::note};
+  return TextItem{t, origin, colour, TextRole::note, {}};
 }
 
 std::vector<Diagnostic> audit(const DisplayPage& page) {
