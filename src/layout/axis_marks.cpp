@@ -13,10 +13,11 @@ namespace {
 
 bool is_value_axis(const Axis& a) { return a.kind == AxisKind::number; }
 
-PathItem segment(Point a, Point b, const Stroke& s) {
+PathItem segment(Point a, Point b, const Stroke& s, ShapeRole role = ShapeRole::furniture) {
   PathItem p;
   p.points = {a, b};
   p.stroke = s;
+  p.role = role;
   return p;
 }
 }  // namespace
@@ -60,7 +61,7 @@ void draw_axis_backdrop(const PlotFrame& f, const PageStyle& st, DisplayPage& pa
   const Stroke rule{st.ink.rule, st.rule_width() * 1.6, {}, false};
   if (is_value_axis(f.y)) {
     for (const auto& t : f.y.ticks)
-      if (t.value != 0) page.add(segment({f.plot.left(), f.py(t.value)}, {f.plot.right(), f.py(t.value)}, grid));
+      if (t.value != 0) page.add(segment({f.plot.left(), f.py(t.value)}, {f.plot.right(), f.py(t.value)}, grid, ShapeRole::grid));
     if (f.y.lo <= 0 && f.y.hi >= 0)
       page.add(segment({f.plot.left(), f.py(0)}, {f.plot.right(), f.py(0)}, rule));
     else  // no zero in view: a plain axis line marks the bottom of the plot
@@ -68,12 +69,12 @@ void draw_axis_backdrop(const PlotFrame& f, const PageStyle& st, DisplayPage& pa
   }
   if (is_value_axis(f.x) && f.y.kind == AxisKind::category) {
     for (const auto& t : f.x.ticks)
-      if (t.value != 0) page.add(segment({f.px(t.value), f.plot.top()}, {f.px(t.value), f.plot.bottom()}, grid));
+      if (t.value != 0) page.add(segment({f.px(t.value), f.plot.top()}, {f.px(t.value), f.plot.bottom()}, grid, ShapeRole::grid));
     if (f.x.lo <= 0 && f.x.hi >= 0) page.add(segment({f.px(0), f.plot.top()}, {f.px(0), f.plot.bottom()}, rule));
   }
   if (is_value_axis(f.x) && is_value_axis(f.y)) {
     for (const auto& t : f.x.ticks)
-      page.add(segment({f.px(t.value), f.plot.top()}, {f.px(t.value), f.plot.bottom()}, grid));
+      page.add(segment({f.px(t.value), f.plot.top()}, {f.px(t.value), f.plot.bottom()}, grid, ShapeRole::grid));
   }
 }
 

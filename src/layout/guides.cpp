@@ -70,6 +70,7 @@ void draw_reference_lines(const MarkContext& ctx, DisplayPage& page, std::vector
   for (const auto& r : ctx.data.spec->references) {
     PathItem line;
     line.stroke = dashed;
+    line.role = ShapeRole::reference;
     if (r.y) {
       const double y = f.py(*r.y);
       line.points = {{f.plot.left(), y}, {f.plot.right(), y}};
@@ -112,6 +113,7 @@ void draw_trend_lines(const MarkContext& ctx, DisplayPage& page, std::vector<Spo
     for (double v : s.x) x0 = std::min(x0, v), x1 = std::max(x1, v);
     const Rgb colour = ctx.colours.at(s.name);
     PathItem line;
+    line.role = ShapeRole::reference;
     line.points = {{f.px(x0), f.py(fit->intercept + fit->slope * x0)}, {f.px(x1), f.py(fit->intercept + fit->slope * x1)}};
     line.stroke = Stroke{text_ink(colour, st.ink.paper, 3.0), st.line_width() * 0.8, {}, true};
     note_line_marks(line.points, page);  // text placed later keeps off the trend line too

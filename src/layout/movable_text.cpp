@@ -25,6 +25,7 @@ void draw_leader(Point from, Point to, const Stroke& stroke, DisplayPage& page) 
   PathItem p;
   p.points = {from, to};
   p.stroke = stroke;
+  p.role = ShapeRole::leader;
   page.add(std::move(p));
 }
 
@@ -112,7 +113,11 @@ void place_callouts(const PanelMovables& p, const PageStyle& st, DisplayPage& pa
     // Paper behind the note keeps it readable where it must cover data.
     const bool covers = std::any_of(page.data_marks.begin(), page.data_marks.end(),
                                     [&](const Rect& m) { return m.overlaps(box); });
-    if (covers) page.add(filled_rect(box, st.ink.paper));
+    if (covers) {
+      PathItem paper = filled_rect(box, st.ink.paper);
+      paper.role = ShapeRole::callout_box;
+      page.add(std::move(paper));
+    }
     const Point end = nearest_point_of(box.inset(pad * 0.5), req.target);
     if (std::hypot(end.x - req.target.x, end.y - req.target.y) > st.base * 0.3) {
       draw_leader(req.target, end, Stroke{st.ink.text, st.rule_width() * 1.5, {}, true}, page);

@@ -22,6 +22,7 @@ PathItem box(double x0, double y0, double x1, double y1, Rgb fill, std::optional
   p.points = {{x0, y0}, {x1, y0}, {x1, y1}, {x0, y1}};
   p.closed = true;
   p.fill = fill;
+  p.role = ShapeRole::data;
   return p;
 }
 

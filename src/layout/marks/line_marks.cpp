@@ -44,6 +44,7 @@ void draw_line_marks(const MarkContext& ctx, DisplayPage& page) {
   for (const auto& s : ctx.data.series) {
     const Rgb colour = ctx.colours.at(s.name);
     PathItem path;
+    path.role = ShapeRole::data;
     path.stroke = Stroke{colour, st.line_width(), dash_lengths(ctx.dash(s.name), st.line_width()), true};
     path.points.reserve(s.x.size());
     for (std::size_t i = 0; i < s.x.size(); ++i) path.points.push_back({f.px(s.x[i]), f.py(s.y[i])});
@@ -108,6 +109,7 @@ void draw_line_marks(const MarkContext& ctx, DisplayPage& page) {
     const double y = placed.centres[i];
     if (std::abs(y - ends[i].at.y) > st.base * 0.25) {
       PathItem leader;
+      leader.role = ShapeRole::leader;
       leader.points = {{x0, ends[i].at.y}, {label_x - st.base * 0.2, y}};
       leader.stroke = Stroke{ends[i].colour, st.rule_width() * 1.5, {}, true};
       page.add(std::move(leader));

@@ -29,6 +29,7 @@ void name_stacked_series(const MarkContext& ctx, DisplayPage& page, const std::v
     const bool moved = std::abs(placed.centres[j] - desired[j]) > st.base * 0.25 || label_x - from_x > st.base * 0.5;
     if (leader_always || moved) {
       PathItem leader;
+      leader.role = ShapeRole::leader;
       leader.points = {{from_x, desired[j]}, {label_x - st.base * 0.2, placed.centres[j]}};
       leader.stroke = Stroke{colour, st.rule_width() * 1.5, {}, true};
       page.add(std::move(leader));

@@ -34,6 +34,7 @@ void draw_stacked_area_marks(const MarkContext& ctx, DisplayPage& page) {
       continue;
     }
     PathItem band;
+    band.role = ShapeRole::data;
     band.points = upper;
     band.points.insert(band.points.end(), lower.rbegin(), lower.rend());
     band.closed = true;

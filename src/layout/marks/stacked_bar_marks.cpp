@@ -23,6 +23,7 @@ constexpr double kBandFill = 0.72;  // as for side-by-side bars
 
 PathItem segment(const Rect& r, Rgb fill, const PageStyle& st) {
   PathItem p = filled_rect(r, fill);
+  p.role = ShapeRole::data;
   p.stroke = Stroke{st.ink.paper, st.rule_width() * 1.5, {}, false};  // a paper rim parts the segments
   return p;
 }
