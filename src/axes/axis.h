@@ -24,7 +24,15 @@ struct Axis {
   double lo = 0, hi = 1;  ///< domain in data units (category axes: -0.5 .. n-0.5)
   std::vector<Tick> ticks;
   std::string title;      ///< axis title with its unit, ready to print
-  NumberFormat format;
+  NumberFormat format;    ///< how the tick labels were written
+  /// How values written beside marks (value labels, callouts' numbers)
+  /// are written: the axis's style, prefix and suffix with the author's
+  /// decimals (−1 when not fixed: then `value_format` decides from the
+  /// values themselves, not from the tick step).
+  NumberFormat values;
+  /// Unlabelled minor ticks, ascending (log axes: 2…9 × 10ⁿ, or the
+  /// decades a thinned axis leaves unlabelled).
+  std::vector<double> minor;
   std::vector<std::string> categories;
   DatePrecision dates = DatePrecision::day;
   bool log = false;       ///< logarithmic (base 10); lo and hi stay in data units
@@ -49,7 +57,25 @@ double smallest_step(const std::vector<const PanelData*>& panels);
 /// The value axis title, restated when the values were transformed.
 std::string value_title(const PanelData& p, const AxisSpec& a);
 
-/// "Title (unit)", "Title", "unit", or "".
+/// "Title (unit)", "Title", "unit", or "". A title that already ends with
+/// its unit in parentheses is not given it again ("Height (m)", unit m).
 std::string axis_title(const std::string& title, const std::string& unit);
+
+/// A log axis's title says so once: "Spores (per litre)" → "Spores (per
+/// litre, log scale)", "Density" → "Density, log scale", "(index)" →
+/// "index, log scale", "" → "Log scale". A title that already says "log
+/// scale" is kept. Linear axes keep `title`.
+std::string scale_title(const std::string& title, bool log);
+
+/// The format for values written beside the marks of panel `p` along axis
+/// `a` (x when `along_x`): value_format over all the panel's values there,
+/// in the axis's value style (`Axis::values`).
+NumberFormat panel_value_format(const PanelData& p, bool along_x, const Axis& a);
+
+/// The same axis with at most `most` labelled ticks (at least 2) over the
+/// same domain, labelled in the same style: for a layout that measured its
+/// labels and found them crowded. Category and date axes, and axes already
+/// within `most`, come back unchanged.
+Axis with_at_most_ticks(const Axis& axis, int most);
 
 }  // namespace forme

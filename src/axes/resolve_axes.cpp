@@ -3,10 +3,12 @@
 #include <cmath>
 #include <limits>
 #include <map>
+#include <string_view>
 
 #include "axes/axis.h"
 #include "data/dates.h"
 #include "scale/date_ticks.h"
+#include "scale/log_labels.h"
 #include "scale/power_of_ten.h"
 #include "scale/scale.h"
 #include "scale/ticks.h"
@@ -16,7 +18,21 @@ namespace forme {
 std::string axis_title(const std::string& title, const std::string& unit) {
   if (title.empty()) return unit;
   if (unit.empty()) return title;
+  const std::string said = "(" + unit + ")";
+  if (title.size() >= said.size() && title.compare(title.size() - said.size(), said.size(), said) == 0) return title;
   return title + " (" + unit + ")";
+}
+
+std::string scale_title(const std::string& title, bool log) {
+  if (!log) return title;
+  constexpr std::string_view kSaid = "log scale";
+  if (title.empty()) return "Log scale";
+  if (title.find(kSaid) != std::string::npos || title.find("Log scale") != std::string::npos) return title;
+  // A title wholly in parentheses is a unit alone: drop them.
+  if (title.front() == '(' && title.back() == ')' && title.find(')') == title.size() - 1)
+    return title.substr(1, title.size() - 2) + ", log scale";
+  if (title.back() == ')') return title.substr(0, title.size() - 1) + ", log scale)";
+  return title + ", log scale";
 }
 
 std::string value_title(const PanelData& p, const AxisSpec& a) {
@@ -40,6 +56,8 @@ double smallest_step(const std::vector<const PanelData*>& panels) {
 namespace {
 
 constexpr int kWantedTicks = 5;
+// Powers of ten label briefly (10⁻⁴), so a log axis carries one more.
+constexpr int kWantedLogTicks = kWantedTicks + 1;
 
 struct Extent {
   double lo = std::numeric_limits<double>::infinity();
@@ -90,6 +108,48 @@ void finish_number_format(Axis& a, const std::optional<NumberFormat>& fmt, int t
   }
 }
 
+// Values beside marks take the axis's style but not its tick decimals:
+// those follow the step, the values follow the data (value_format).
+NumberFormat values_format(const NumberFormat& ticks, int author_decimals) {
+  NumberFormat v = ticks;
+  v.decimals = author_decimals;
+  v.significant = 0;
+  v.own_power = false;
+  return v;
+}
+
+// Labels the ticks of a linear number axis. Ticks a step apart always
+// print apart; should rounding still merge two (a step finer than the
+// decimals the author allowed is not the author's wish either), the
+// labels get more decimals until they do not.
+void label_linear_ticks(Axis& a, const Ticks& t, std::optional<NumberFormat> format) {
+  const int author_decimals = format ? format->decimals : -1;
+  const bool asked_power = format && format->style == NumberFormat::Style::power_of_ten;
+  if ((!format || asked_power) && t.values.size() >= 2) {
+    // Very large or very small values are written against a power of ten
+    // (that of the largest tick), as is any axis whose author asks for it.
+    double largest = 0;
+    for (double v : t.values) largest = std::max(largest, std::abs(v));
+    NumberFormat automatic = automatic_format(largest, t.values[1] - t.values[0], asked_power);
+    if (asked_power) {
+      format->exponent = automatic.exponent;
+      if (format->decimals < 0) format->decimals = automatic.decimals;
+    } else if (automatic.style != NumberFormat::Style::plain) {
+      format = automatic;
+    }
+  }
+  finish_number_format(a, format, t.decimals);
+  a.values = values_format(a.format, author_decimals);
+  for (int more = 0;; ++more) {
+    a.ticks.clear();
+    for (double v : t.values) a.ticks.push_back({v, format_number(v, a.format), false});
+    bool apart = true;
+    for (std::size_t i = 1; i < a.ticks.size() && apart; ++i) apart = a.ticks[i].label != a.ticks[i - 1].label;
+    if (apart || a.format.decimals < 0 || more >= 17) break;
+    ++a.format.decimals;
+  }
+}
+
 // Nice ticks, even for data near the largest double: such an extent (whose
 // span may not even be a finite double) is ticked after scaling it down by
 // its power of ten, and the ticks scaled back up; ticks beyond the largest
@@ -120,27 +180,21 @@ Axis number_axis(Extent e, bool from_zero, const AxisSpec& spec) {
     const double most = std::numeric_limits<double>::max();
     e = {from_zero && e.lo >= 0 ? 0 : std::max(e.lo - pad, -most), std::min(e.hi + pad, most)};
   }
-  Ticks t = ticks_within_doubles(e);
-  std::optional<NumberFormat> format = spec.format;
-  const bool asked_power = format && format->style == NumberFormat::Style::power_of_ten;
-  if ((!format || asked_power) && t.values.size() >= 2) {
-    // Very large or very small values are written against a power of ten
-    // (that of the largest tick), as is any axis whose author asks for it.
-    double largest = 0;
-    for (double v : t.values) largest = std::max(largest, std::abs(v));
-    NumberFormat automatic = automatic_format(largest, t.values[1] - t.values[0], asked_power);
-    if (asked_power) {
-      format->exponent = automatic.exponent;
-      if (format->decimals < 0) format->decimals = automatic.decimals;
-    } else if (automatic.style != NumberFormat::Style::plain) {
-      format = automatic;
-    }
-  }
-  finish_number_format(a, format, t.decimals);
+  const Ticks t = ticks_within_doubles(e);
+  label_linear_ticks(a, t, spec.format);
   a.lo = std::min(e.lo, t.values.empty() ? e.lo : t.values.front());
   a.hi = std::max(e.hi, t.values.empty() ? e.hi : t.values.back());
-  for (double v : t.values) a.ticks.push_back({v, format_number(v, a.format), false});
   return a;
+}
+
+void label_log_ticks(Axis& a, const std::vector<double>& ticks, const std::optional<NumberFormat>& asked) {
+  a.format = asked.value_or(NumberFormat{});
+  a.format.decimals = -1;
+  a.values = values_format(a.format, asked ? asked->decimals : -1);
+  a.ticks.clear();
+  const std::vector<std::string> labels = log_tick_labels(ticks, asked);
+  for (std::size_t i = 0; i < ticks.size(); ++i) a.ticks.push_back({ticks[i], labels[i], false});
+  a.minor = log_minor_ticks(a.lo, a.hi, ticks);
 }
 
 Axis log_axis(Extent e, const AxisSpec& spec) {
@@ -148,7 +202,7 @@ Axis log_axis(Extent e, const AxisSpec& spec) {
   a.kind = AxisKind::number;
   a.log = true;
   LogScale s{e.lo, e.hi, 0, 1};
-  std::vector<double> ticks = s.ticks(kWantedTicks);
+  std::vector<double> ticks = s.ticks(kWantedLogTicks);
   if (!ticks.empty()) {
     a.lo = std::min(e.lo, ticks.front());
     a.hi = std::max(e.hi, ticks.back());
@@ -157,11 +211,7 @@ Axis log_axis(Extent e, const AxisSpec& spec) {
     a.hi = e.hi;
   }
   if (a.hi <= a.lo) a.hi = a.lo * 10;
-  int decimals = 0;
-  for (double v : ticks)
-    if (v < 1) decimals = std::max(decimals, static_cast<int>(std::ceil(-std::log10(v) - 1e-9)));
-  finish_number_format(a, spec.format, decimals);
-  for (double v : ticks) a.ticks.push_back({v, format_number(v, a.format), false});
+  label_log_ticks(a, ticks, spec.format);
   return a;
 }
 
@@ -251,12 +301,37 @@ Axis build_axis(const std::vector<const PanelData*>& panels, bool is_x, Diagnost
   } else {
     a = number_axis(e, from_zero, as);
   }
-  a.title = is_x ? axis_title(as.title, as.unit) : value_title(first, as);
-  if (a.log) a.title += a.title.empty() ? "Logarithmic scale" : " (log scale)";
+  a.title = scale_title(is_x ? axis_title(as.title, as.unit) : value_title(first, as), a.log);
   return a;
 }
 
 }  // namespace
+
+Axis with_at_most_ticks(const Axis& axis, int most) {
+  most = std::max(most, 2);
+  if (axis.kind != AxisKind::number || static_cast<int>(axis.ticks.size()) <= most) return axis;
+  Axis a = axis;
+  const std::optional<NumberFormat> asked = axis.values;  // the style the axis was given or chose
+  if (axis.log) {
+    for (int m = most; m >= 2; --m) {
+      const std::vector<double> ticks = LogScale{axis.lo, axis.hi, 0, 1}.ticks(m);
+      if (static_cast<int>(ticks.size()) <= most || m == 2) {
+        label_log_ticks(a, ticks, asked);
+        break;
+      }
+    }
+    return a;
+  }
+  for (int m = most; m >= 2; --m) {
+    Ticks t = extended_ticks(axis.lo, axis.hi, m);
+    std::erase_if(t.values, [&](double v) { return v < axis.lo - 1e-9 * std::abs(t.step) || v > axis.hi + 1e-9 * std::abs(t.step); });
+    if (static_cast<int>(t.values.size()) <= most && t.values.size() >= 2) {
+      label_linear_ticks(a, t, asked);
+      return a;
+    }
+  }
+  return axis;
+}
 
 std::vector<PanelAxes> resolve_axes(const std::vector<PanelData>& panels, const GridSpec& grid, DiagnosticSink& sink) {
   // Panels share a scale when they show the same columns with the same
@@ -288,8 +363,8 @@ std::vector<PanelAxes> resolve_axes(const std::vector<PanelData>& panels, const 
       out[j].x.own_scale = own_x;
       out[j].y.own_scale = own_y;
       // Explicit panel lists may title their axes differently.
-      out[j].x.title = axis_title(panels[j].spec->x_axis.title, panels[j].spec->x_axis.unit);
-      if (!out[j].y.log) out[j].y.title = value_title(panels[j], panels[j].spec->y_axis);
+      out[j].x.title = scale_title(axis_title(panels[j].spec->x_axis.title, panels[j].spec->x_axis.unit), out[j].x.log);
+      out[j].y.title = scale_title(value_title(panels[j], panels[j].spec->y_axis), out[j].y.log);
     }
   }
   return out;

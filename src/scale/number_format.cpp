@@ -112,15 +112,22 @@ constexpr int kLowestSiPower = -2;
 constexpr int kHighestSiPower = 4;
 constexpr const char* kSiPrefixes[] = {"µ", "m", "", "k", "M", "G", "T"};
 
+/// Rounds `d` as `f` asks: to fixed decimals, or to at most `f.significant`
+/// significant digits without dropping a digit left of the point.
+void round_as_asked(Decimal& d, const NumberFormat& f) {
+  if (f.decimals >= 0) round_to(d, f.decimals);
+  else if (f.significant > 0 && !d.zero()) round_to(d, std::max(0, f.significant - 1 - d.order()));
+}
+
 /// Scales `d` by the SI prefix that keeps the rounded mantissa below 1000;
 /// returns the prefix.
-std::string apply_si(Decimal& d, int decimals) {
+std::string apply_si(Decimal& d, const NumberFormat& f) {
   if (d.zero()) return "";
   int power = std::clamp(static_cast<int>(std::floor(d.order() / 3.0)), kLowestSiPower, kHighestSiPower);
   for (;;) {
     Decimal scaled = d;
     scaled.exponent -= 3 * power;
-    if (decimals >= 0) round_to(scaled, decimals);
+    round_as_asked(scaled, f);
     // Rounding can carry into the next thousand (999.96k → 1000.0k).
     if (!scaled.zero() && scaled.order() >= 3 && power < kHighestSiPower) {
       ++power;
@@ -131,13 +138,26 @@ std::string apply_si(Decimal& d, int decimals) {
   }
 }
 
-/// "×10" and the power in superscript digits: 10³⁰⁸, 10⁻⁶.
-std::string times_power_of_ten_text(int power) {
-  static constexpr const char* kSuperscript[] = {"⁰", "¹", "²", "³", "⁴", "⁵", "⁶", "⁷", "⁸", "⁹"};
-  std::string digits;
-  for (char c : std::to_string(std::abs(power))) digits += kSuperscript[c - '0'];
-  return std::string("×10") + (power < 0 ? "⁻" : "") + digits;
+/// Writes `d` against its own power of ten, the mantissa in [1, 10) after
+/// rounding (9.996×10⁸ to three digits is 1.00×10⁹); returns the power.
+int apply_own_power(Decimal& d, const NumberFormat& f) {
+  if (d.zero()) return 0;
+  if (f.decimals < 0 && f.significant > 0) round_to(d, f.significant - 1 - d.order());
+  for (int power = d.order();;) {
+    Decimal scaled = d;
+    scaled.exponent -= power;
+    if (f.decimals >= 0) round_to(scaled, f.decimals);
+    if (!scaled.zero() && scaled.order() >= 1) {
+      ++power;
+      continue;
+    }
+    d = scaled;
+    return power;
+  }
 }
+
+/// "×10" and the power in superscript digits: ×10³⁰⁸, ×10⁻⁶.
+std::string times_power_of_ten_text(int power) { return "×" + power_of_ten_text(power); }
 
 }  // namespace
 
@@ -159,14 +179,20 @@ std::string format_number(double v, const NumberFormat& f) {
       unit = "%";
       break;
     case NumberFormat::Style::si:
-      unit = apply_si(d, f.decimals);
+      unit = apply_si(d, f);
       break;
     case NumberFormat::Style::power_of_ten:
-      if (!d.zero()) d.exponent -= f.exponent;
-      unit = times_power_of_ten_text(f.exponent);
+      if (f.own_power) {
+        const int power = apply_own_power(d, f);
+        unit = times_power_of_ten_text(power);
+      } else {
+        if (!d.zero()) d.exponent -= f.exponent;
+        unit = times_power_of_ten_text(f.exponent);
+      }
       break;
   }
-  if (f.decimals >= 0) round_to(d, f.decimals);
+  if (f.style != NumberFormat::Style::si && !(f.style == NumberFormat::Style::power_of_ten && f.own_power))
+    round_as_asked(d, f);
   if (d.zero()) {
     negative = false;
     if (f.style == NumberFormat::Style::power_of_ten) unit.clear();  // "0", not "0×10³⁰⁸"
@@ -196,23 +222,39 @@ int decimals_for_step(double step) {
   return std::max(0, 1 - order);
 }
 
-std::string format_value(double v, const NumberFormat& f) {
-  if (f.decimals >= 0 || !std::isfinite(v) || v == 0 || f.style == NumberFormat::Style::power_of_ten)
-    return format_number(v, f);
-  // The magnitude as printed: percent of a fraction is a hundred times it;
-  // an SI mantissa keeps the significant digits of the value itself.
-  const double shown = std::abs(v) * (f.style == NumberFormat::Style::fraction_percent ? 100.0 : 1.0);
-  const int lead = static_cast<int>(std::floor(std::log10(shown)));  // power of the leading digit
-  int places = 2 - lead;  // decimals of `shown` that keep three significant digits
-  if (f.style != NumberFormat::Style::si) places = std::max(places, 0);
-  const double scale = std::pow(10.0, places);
-  if (!std::isfinite(scale) || scale == 0) return format_number(v, f);
-  const double rounded = std::round(shown * scale) / scale;  // half away from zero
-  if (f.style != NumberFormat::Style::fraction_percent) return format_number(std::copysign(rounded, v), f);
-  // Already in percent: dividing by 100 again would bring back binary noise.
-  NumberFormat as_percent = f;
-  as_percent.style = NumberFormat::Style::percent;
-  return format_number(std::copysign(rounded, v), as_percent);
+std::string power_of_ten_text(int power) {
+  static constexpr const char* kSuperscript[] = {"⁰", "¹", "²", "³", "⁴", "⁵", "⁶", "⁷", "⁸", "⁹"};
+  std::string digits;
+  for (char c : std::to_string(std::abs(power))) digits += kSuperscript[c - '0'];
+  return std::string("10") + (power < 0 ? "⁻" : "") + digits;
 }
+
+NumberFormat value_format(const std::vector<double>& values, const NumberFormat& axis) {
+  NumberFormat f = axis;
+  if (f.decimals >= 0 || f.significant > 0) return f;  // fixed, or already decided for the panel
+  if (f.style == NumberFormat::Style::power_of_ten) f.own_power = true;
+  // A typed value has few digits; more than this means arithmetic made it.
+  constexpr int kMostTyped = 6, kComputed = 3, kMostDigits = 17;
+  int digits = 1;
+  for (double v : values) {
+    if (!std::isfinite(v) || v == 0) continue;
+    const int held = static_cast<int>(shortest_decimal(std::abs(v)).digits.size());
+    digits = std::max(digits, held <= kMostTyped ? held : kComputed);
+  }
+  std::vector<double> distinct;
+  for (double v : values)
+    if (std::isfinite(v)) distinct.push_back(v);
+  std::sort(distinct.begin(), distinct.end());
+  distinct.erase(std::unique(distinct.begin(), distinct.end()), distinct.end());
+  for (f.significant = digits; f.significant < kMostDigits; ++f.significant) {
+    bool apart = true;
+    for (std::size_t i = 1; i < distinct.size() && apart; ++i)
+      apart = format_number(distinct[i - 1], f) != format_number(distinct[i], f);
+    if (apart) break;
+  }
+  return f;
+}
+
+std::string format_value(double v, const NumberFormat& f) { return format_number(v, value_format({v}, f)); }
 
 }  // namespace forme

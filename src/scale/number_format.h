@@ -8,6 +8,7 @@
 /// (1.005 → "1.01", 2.5 → "3"), so what prints is what a reader expects
 /// from the number as written.
 #include <string>
+#include <vector>
 
 namespace forme {
 
@@ -27,6 +28,13 @@ struct NumberFormat {
   std::string prefix;         ///< e.g. "£"
   std::string suffix;         ///< e.g. " t"
   int exponent = 0;           ///< power_of_ten: the power every value is written against
+  /// With `decimals` = -1: round to at most this many significant digits
+  /// (0 = no limit), never dropping a digit left of the printed point
+  /// (plain and percent: 1,234.5 at 3 → "1,235"), no trailing zeros.
+  int significant = 0;
+  /// power_of_ten: each value against its own power (mantissa in [1, 10)),
+  /// as a value written beside its mark reads: 7.8×10⁸, not 0.78×10⁹.
+  bool own_power = false;
 };
 
 /// Formats `v`. Negative numbers use the Unicode minus sign (U+2212), as
@@ -42,13 +50,23 @@ struct NumberFormat {
 /// ticks lines up: 0, 0.5×10³⁰⁸, 1.0×10³⁰⁸ (zero stays "0").
 std::string format_number(double v, const NumberFormat& f);
 
-/// Formats one data value written beside its mark (a value label), in the
-/// axis's style. With fixed decimals, exactly as format_number. Otherwise
-/// to three significant digits of the number as printed (common practice
-/// for labels read at a glance), never dropping digits left of the point
-/// in plain and percent styles: 46.449 → "46.4", 1,234.5 → "1,235",
-/// 0.04567 → "0.0457", 47 → "47", and in SI 46,449 → "46.4k".
+/// The format for data values written beside their marks (value labels) of
+/// one panel, in the style of `axis` (the author's style and decimals, see
+/// `Axis::values`). Fixed decimals are kept. Otherwise each value is shown
+/// as the data hold it: with the significant digits of its shortest exact
+/// decimal when that has at most six (a typed value: 1.48, 61.66, 3.4×10⁹),
+/// else three (a computed one: 103.448275… → 103; common practice for
+/// labels read at a glance); all share the largest such count, and more are
+/// added until distinct values print distinctly. A value printed shorter
+/// than the count keeps its own digits (61 stays "61" beside "61.66"). A
+/// format whose `significant` is already set comes back as it is.
+NumberFormat value_format(const std::vector<double>& values, const NumberFormat& axis);
+
+/// One value label on its own: format_number(v, value_format({v}, f)).
 std::string format_value(double v, const NumberFormat& f);
+
+/// "10" and the power in superscript digits: 10⁶, 10⁻⁴, 10⁰.
+std::string power_of_ten_text(int power);
 
 /// The style an axis takes when its author chose none: plain, unless the
 /// largest tick is so large (≥ 10^15) or so small (< 10^-5) that plain

@@ -80,8 +80,14 @@ std::vector<double> LogScale::ticks(int m) const {
 
   std::vector<double> powers = decade_ticks(lo, hi, {1}, 1);
   if (static_cast<int>(powers.size()) > m) {
-    const int stride = static_cast<int>((powers.size() + static_cast<std::size_t>(m) - 1) / static_cast<std::size_t>(m));
-    return decade_ticks(lo, hi, {1}, stride);
+    // Every k-th power, k the first of 2, 3, 5, 10, 20, 30, 50, … that
+    // leaves at most m: labels then fall on round powers (10⁻¹⁰, 10⁻⁵, 1, 10⁵).
+    const std::size_t least = (powers.size() + static_cast<std::size_t>(m) - 1) / static_cast<std::size_t>(m);
+    std::size_t stride = 1;
+    for (std::size_t scale = 1; stride < least; scale *= 10)
+      for (std::size_t k : {1, 2, 3, 5})
+        if (stride < least) stride = k * scale;
+    return decade_ticks(lo, hi, {1}, static_cast<int>(stride));
   }
   // Sparser sets first, so a tie keeps the sparser one.
   std::vector<double> best = std::move(powers);

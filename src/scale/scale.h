@@ -33,8 +33,9 @@ struct LogScale {
   /// Data value at position `r`; NaN for an invalid domain. An empty range
   /// or domain gives the domain's geometric middle.
   double invert(double r) const;
-  /// Tick values inside the domain, ascending: powers of ten (every k-th
-  /// power when there are far more than `m`); with 2 and 5 times each power
+  /// Tick values inside the domain, ascending: powers of ten (when there are
+  /// more than `m`, every k-th: the powers divisible by k, k the first of
+  /// 2, 3, 5, 10, 20, 30, 50, … leaving at most `m`); with 2 and 5 times each power
   /// added, or every whole multiple 1–9, when the span is small and that
   /// brings the count nearer `m` (ties go to the sparser set). A domain
   /// holding fewer than two such ticks (3 … 4) gets linear ticks

@@ -53,6 +53,8 @@ void draw_stacked_bar_marks(const MarkContext& ctx, DisplayPage& page) {
   for (const auto& s : series)
     for (double x : s.x) last_x = std::max(last_x, x);
   std::vector<double> name_y(series.size(), NAN);
+  // One format for all segments' values: each as the data hold it, no two alike.
+  const NumberFormat values = panel_value_format(ctx.data, false, f.y);
   for (std::size_t k = 0; k < series.size(); ++k) {
     const Rgb colour = ctx.colours.at(series[k].name);
     for (std::size_t i = 0; i < series[k].x.size(); ++i) {
@@ -68,7 +70,7 @@ void draw_stacked_bar_marks(const MarkContext& ctx, DisplayPage& page) {
       if (!ctx.data.spec->value_labels || v == 0) continue;
       ShapeOptions o;
       o.tabular_figures = true;
-      ShapedText t = shape_text(format_value(v, f.y.format), st.fonts.regular, st.label_size(), o);
+      ShapedText t = shape_text(format_number(v, values), st.fonts.regular, st.label_size(), o);
       const Rgb ink = ink_on(colour, st);
       const bool fits = t.width + 2 * pad <= r.w && lh + pad <= r.h && meets(contrast_ratio(ink, colour), 4.5);
       if (fits) {

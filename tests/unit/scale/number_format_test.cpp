@@ -184,35 +184,109 @@ TEST_CASE("axes choose a power of ten only for very large or very small values",
   CHECK(automatic_format(1e3, 1e2, true).exponent == 3);  // asked for by the author
 }
 
-// Value labels: three significant digits of the number as printed (common
-// practice), integer digits always kept in plain and percent styles; the
-// expected strings are worked by hand from that rule.
-TEST_CASE("format_value writes a label's value to three significant digits, keeping whole digits",
-          "[scale][format]") {
+// Value labels show each value as the data hold it: every significant digit
+// of a value with at most six (a value someone typed), three of one with
+// more (a computed value; three is common practice for labels read at a
+// glance), integer digits always kept. The old rule (always three) wrote
+// 1.48 and 0.67 as "1.5" and "0.67" beside a 1-decimal axis, and cut typed
+// data (46.449 → "46.4"); it is replaced deliberately. Expected strings
+// worked by hand from the rule.
+TEST_CASE("format_value writes a label's value as the data hold it", "[scale][format]") {
   using forme::format_value;
-  using forme::NumberFormat;
   NumberFormat plain;
-  CHECK(format_value(46.449, plain) == "46.4");
+  CHECK(format_value(46.449, plain) == "46.449");
   CHECK(format_value(47, plain) == "47");
-  CHECK(format_value(1234.5, plain) == "1,235");
+  CHECK(format_value(1234.5, plain) == "1,234.5");
   CHECK(format_value(46449, plain) == "46,449");
-  CHECK(format_value(0.04567, plain) == "0.0457");
-  CHECK(format_value(0.5, plain) == "0.5");
-  CHECK(format_value(-2.345, plain) == "\u22122.35");  // half away from zero, minus sign U+2212
+  CHECK(format_value(0.04567, plain) == "0.04567");
+  CHECK(format_value(1.48, plain) == "1.48");
+  CHECK(format_value(-0.67, plain) == kMinus + "0.67");  // minus sign U+2212
   CHECK(format_value(0, plain) == "0");
+  // Computed: 100 × 103/99 = 104.0404…, seventeen digits → three, whole digits kept.
+  CHECK(format_value(100.0 * 103 / 99, plain) == "104");
+  CHECK(format_value(0.1 + 0.2, plain) == "0.3");       // 0.30000000000000004 → three digits → 0.3
+  CHECK(format_value(-2.0 / 3, plain) == kMinus + "0.667");
+  CHECK(format_value(1234567.891, plain) == "1,234,568");  // ten digits: computed-looking, whole digits kept
   NumberFormat si;
-  si.style = NumberFormat::Style::si;
-  CHECK(format_value(46449, si) == "46.4k");
-  CHECK(format_value(10734, si) == "10.7k");
-  CHECK(format_value(999'960, si) == "1M");
-  CHECK(format_value(0.04567, si) == "45.7m");
+  si.style = Style::si;
+  CHECK(format_value(46449, si) == "46.449k");
+  CHECK(format_value(999'960, si) == "999.96k");
+  CHECK(format_value(0.04567, si) == "45.67m");
   NumberFormat share;
-  share.style = NumberFormat::Style::fraction_percent;
-  CHECK(format_value(0.12345, share) == "12.3%");
+  share.style = Style::fraction_percent;
+  CHECK(format_value(0.125, share) == "12.5%");
   NumberFormat pct;
-  pct.style = NumberFormat::Style::percent;
-  CHECK(format_value(12.345, pct) == "12.3%");
+  pct.style = Style::percent;
+  CHECK(format_value(12.345, pct) == "12.345%");
   NumberFormat fixed;
   fixed.decimals = 2;
   CHECK(format_value(46.449, fixed) == "46.45");  // the author's decimals win
+}
+
+// Value labels written against a power of ten take each value's own power,
+// mantissa in [1, 10): 0.78e9 is 7.8 × 10^8 (worked by hand).
+TEST_CASE("power-of-ten value labels: right mantissa, right exponent", "[scale][format]") {
+  NumberFormat axis;
+  axis.style = Style::power_of_ten;
+  axis.exponent = 9;  // the axis's shared power is not the labels'
+  const NumberFormat f = forme::value_format({3.4e9, 1.25e9, 0.78e9}, axis);
+  CHECK(format_number(3.4e9, f) == "3.4×10⁹");
+  CHECK(format_number(1.25e9, f) == "1.25×10⁹");
+  CHECK(format_number(0.78e9, f) == "7.8×10⁸");
+  CHECK(format_number(-4.5e-7, f) == kMinus + "4.5×10⁻⁷");
+  CHECK(format_number(0, f) == "0");
+  // Rounding that carries into the next power moves the power: 9.996e8 to
+  // three significant digits is 1.00e9, written 1×10⁹ (no trailing zeros).
+  NumberFormat three = f;
+  three.significant = 3;
+  CHECK(format_number(9.996e8, three) == "1×10⁹");
+}
+
+// The old power-of-ten tick writing "31,622,800.000×10⁰" came from a log
+// axis; a linear axis asked for powers writes one shared power with the
+// mantissa digits its step needs (worked by hand: step 0.5 × 10^9 → 1 decimal).
+TEST_CASE("shared power of ten: mantissas to the step's digits", "[scale][format]") {
+  NumberFormat f = forme::automatic_format(3.5e9, 5e8, true);
+  CHECK(f.exponent == 9);
+  CHECK(f.decimals == 1);
+  CHECK(format_number(3.5e9, f) == "3.5×10⁹");
+  CHECK(format_number(1e9, f) == "1.0×10⁹");
+}
+
+// Labels of one panel must tell different values apart (worked by hand).
+TEST_CASE("value_format adds digits until different values print differently", "[scale][format]") {
+  NumberFormat plain;
+  // Typed values: each keeps its own digits; the shared count is the most held (4).
+  const NumberFormat typed = forme::value_format({61.0, 61.66, 1.48, 0.67}, plain);
+  CHECK(format_number(61.0, typed) == "61");
+  CHECK(format_number(61.66, typed) == "61.66");
+  CHECK(format_number(1.48, typed) == "1.48");
+  CHECK(format_number(0.67, typed) == "0.67");
+  // Computed values that agree to four digits (104, 103.5) get a fifth, shortest.
+  const double a = 1034.0 / 9.99, b = 1034.4 / 9.99;  // 103.50…, 103.54…
+  const NumberFormat computed = forme::value_format({a, b}, plain);
+  CHECK(format_number(a, computed) == "103.5");
+  CHECK(format_number(b, computed) == "103.54");
+  // Equal values may print alike.
+  const NumberFormat same = forme::value_format({2.0 / 3, 2.0 / 3}, plain);
+  CHECK(format_number(2.0 / 3, same) == "0.667");
+}
+
+TEST_CASE("significant digits never drop digits left of the point", "[scale][format]") {
+  NumberFormat f;
+  f.significant = 2;
+  CHECK(format_number(1234.5, f) == "1,235");  // worked by hand
+  CHECK(format_number(0.012345, f) == "0.012");
+  CHECK(format_number(9.96, f) == "10");
+  f.style = Style::si;
+  CHECK(format_number(46449, f) == "46k");
+  CHECK(format_number(999'600, f) == "1M");  // 999.6k → 1000k carries to the next prefix
+}
+
+TEST_CASE("powers of ten in superscript digits", "[scale][format]") {
+  // Superscript digits U+2070, U+00B9, U+00B2, U+00B3, U+2074…U+2079; minus U+207B.
+  CHECK(forme::power_of_ten_text(6) == "10⁶");
+  CHECK(forme::power_of_ten_text(-4) == "10⁻⁴");
+  CHECK(forme::power_of_ten_text(0) == "10⁰");
+  CHECK(forme::power_of_ten_text(-10) == "10⁻¹⁰");
 }
