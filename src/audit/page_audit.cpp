@@ -35,48 +35,4 @@ void audit_page(const PageSpec& spec, const std::vector<PanelData>& panels, cons
   }
 }
 
-namespace {
-
-// Text the page sets whatever its data: everything else labels the data.
-bool is_furniture(TextRole r) {
-  switch (r) {
-    case TextRole::title: case TextRole::standfirst: case TextRole::panel_title: case TextRole::axis_title:
-    case TextRole::tick_label: case TextRole::note: case TextRole::source: return true;
-    default: return false;
-  }
-}
-
-}  // namespace
-
-void audit_layout(const PageSpec& spec, const DisplayPage& page, DiagnosticSink& out, const Limits& limits) {
-  std::vector<const TextItem*> texts;
-  std::size_t labels = 0;
-  for (const auto& item : page.items)
-    if (const auto* t = std::get_if<TextItem>(&item)) {
-      texts.push_back(t);
-      labels += is_furniture(t->role) ? 0 : 1;
-    }
-  if (labels > limits.labels) {
-    out.report({Severity::error, spec.loc,
-                "the page carries " + std::to_string(labels) + " labels, more than the " +
-                    std::to_string(limits.labels) + " one page may hold",
-                "label fewer points (or split the page), or raise the limit with '--limit labels=N'"});
-    return;  // the pairwise checks below would take long and say little more
-  }
-  for (const TextItem* t : texts)
-    if (t->text.size < 6)
-      out.warn(spec.loc, "text '" + t->text.utf8 + "' is set at " + std::to_string(t->text.size).substr(0, 4) +
-                             " pt, below the 6 pt that print can carry legibly",
-               "raise 'type.size' or use a larger sheet");
-  // Every pair; pages carry hundreds of texts at most.
-  const double eps = 0.01;
-  for (std::size_t i = 0; i < texts.size(); ++i)
-    for (std::size_t j = i + 1; j < texts.size(); ++j) {
-      const Rect a = texts[i]->box().inset(eps), b = texts[j]->box().inset(eps);
-      if (a.overlaps(b))
-        out.warn(spec.loc, "text '" + texts[i]->text.utf8 + "' overlaps '" + texts[j]->text.utf8 + "'",
-                 "shorten the text, or give the panels more room");
-    }
-}
-
 }  // namespace forme

@@ -4,6 +4,7 @@
 /// Each finding is located at the description value it concerns.
 #include <vector>
 
+#include "audit/layout_audit.h"
 #include "axes/axis.h"
 #include "base/diagnostic.h"
 #include "base/limits.h"
@@ -20,10 +21,5 @@ inline constexpr std::size_t kMaxSeriesPerPanel = 6;
 /// Checks the description against its data and resolved scales.
 void audit_page(const PageSpec& spec, const std::vector<PanelData>& panels, const std::vector<PanelAxes>& axes,
                 DiagnosticSink& findings);
-
-/// Checks the laid-out page: text that overlaps other text, text below 6 pt;
-/// more than `limits.labels` labels on the page is an error.
-void audit_layout(const PageSpec& spec, const DisplayPage& page, DiagnosticSink& findings,
-                  const Limits& limits = {});
 
 }  // namespace forme
