@@ -4,6 +4,7 @@
 #include <cmath>
 
 #include "data/dates.h"
+#include "layout/minor_ticks.h"
 #include "layout/text_items.h"
 #include "text/wrap.h"
 
@@ -76,6 +77,7 @@ void draw_axis_backdrop(const PlotFrame& f, const PageStyle& st, DisplayPage& pa
     for (const auto& t : f.x.ticks)
       page.add(segment({f.px(t.value), f.plot.top()}, {f.px(t.value), f.plot.bottom()}, grid, ShapeRole::grid));
   }
+  draw_minor_ticks(f, st, page);
 }
 
 void draw_axis_labels(const PlotFrame& f, const PageStyle& st, const AxisLabelling& which, DisplayPage& page) {
