@@ -162,6 +162,41 @@ TEST_CASE("negative numbers carry U+2212 from the bundled faces", "[outside][num
   CHECK(faces >= 1);
 }
 
+TEST_CASE("stacked bar values read back as the CSV holds them", "[outside][numbers]") {
+  REQUIRE(have_tool("pdftotext"));
+  // Invented: a fictional allotment society's harvest by crop, tonnes. The
+  // values are typed with up to three decimals; the axis ticks step by 5 or
+  // 10, so values held to the tick step would print 1, 1, 12, 4.
+  const char* kCsv =
+      "plot,crop,tonnes\n"
+      "East,Beans,1.48\nEast,Kale,0.67\nEast,Leeks,12.125\n"
+      "West,Beans,3.5\nWest,Kale,2.25\nWest,Leeks,9.875\n";
+  Rendered r;
+  render(r,
+         "sheet: {size: A4, margins: 15mm}\n"
+         "heading: {title: Harvest by plot}\n"
+         "tables: {t: t.csv}\n"
+         "panel: {kind: stacked-bar, table: t, x: plot, y: tonnes, series-by: crop, y-unit: tonnes,"
+         " value-labels: true}\n"
+         "source: \"Source: invented for this test\"\n",
+         {{"t.csv", kCsv}});
+  std::multiset<double> printed;
+  for (const auto& w : r.words)
+    if (double v = read_number(w); !std::isnan(v)) printed.insert(v);
+  // Each CSV value, parsed here from the CSV text, is printed exactly.
+  std::istringstream rows(kCsv);
+  std::string row;
+  std::getline(rows, row);  // header
+  int values = 0;
+  while (std::getline(rows, row)) {
+    const double v = std::stod(row.substr(row.rfind(',') + 1));
+    INFO(row);
+    CHECK(printed.count(v) == 1);
+    ++values;
+  }
+  CHECK(values == 6);
+}
+
 TEST_CASE("the bundled faces' minus sign is a figure wide (fontTools)", "[outside][numbers][fonts]") {
   // fontTools (Debian's python3-fonttools) reads the cmap and hmtx tables.
   TempDir dir;
