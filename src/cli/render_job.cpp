@@ -54,6 +54,7 @@ PageStyle style_for_page(const PageSpec& spec, const FontSet& fonts) {
 Table load_table(const TableSource& src, const Limits& limits) {
   CsvOptions o;
   o.declared = src.declared;
+  o.missing = src.missing;
   o.max_bytes = limits.table_bytes;
   try {
     Table t = read_csv(src.path, src.display_path, o);

@@ -124,38 +124,83 @@ ParsedNumber parse_number(std::string_view t) {
   return {NumberStatus::ok, v};
 }
 
-InferredType infer_column_type(const Column& column) {
-  bool any = false;
-  bool number_ok = true;
-  bool any_decimal = false;
-  bool date_ok = true;
-  std::optional<DatePrecision> precision;
+bool is_missing_cell(std::string_view text, const std::vector<std::string>& markers) {
+  if (text.empty()) return true;
+  for (const std::string& m : markers)
+    if (text == m) return true;
+  return false;
+}
+
+bool looks_like_missing_word(std::string_view text) {
+  static const char* const kWords[] = {"na", "n/a", "n.a.", "null", "none", "nil", "-", "--", "?", ".", "..", "missing"};
+  for (const char* w : kWords)
+    if (equals_lower(text, w)) return true;
+  return false;
+}
+
+namespace {
+
+// "Nearly all": k of n cells, with the others at most one, or one in ten,
+// once there are four cells or more (see column_types.h).
+bool nearly_all(std::size_t k, std::size_t n) {
+  if (k == 0) return false;
+  if (k == n) return true;
+  const std::size_t others = n - k;
+  return n >= 4 && (others <= 1 || others * 10 <= n);
+}
+
+// "2017-18": a span of two years, written like a month that does not exist.
+bool is_year_span(std::string_view t) {
+  if (t.size() != 7 || parse_date(t)) return false;
+  const int year = (t[0] - '0') * 1000 + (t[1] - '0') * 100 + (t[2] - '0') * 10 + (t[3] - '0');
+  const int next = (t[5] - '0') * 10 + (t[6] - '0');
+  return next == (year + 1) % 100;
+}
+
+// The first cell of `column` that reads as a valid date, for hints.
+std::string first_valid_date(const Column& column) {
+  for (const std::string& cell : column.text)
+    if (parse_date(trim_blanks(cell))) return std::string(trim_blanks(cell));
+  return "2024-03-31";
+}
+
+std::string marker_hint(std::string_view t) {
+  return "declare it as a missing-value marker of the table, e.g. 'missing: [" + quote_cell(t) +
+         "]' beside its 'file:', or leave the cell empty";
+}
+
+}  // namespace
+
+InferredType infer_column_type(const Column& column, const std::vector<std::string>& markers) {
+  std::size_t n = 0, numbers = 0, decimals = 0, dated = 0, years = 0;
+  std::optional<DatePrecision> precision;  // of the first cell written like a date
+  const bool year_name = contains_year(column.name);
   for (const std::string& cell : column.text) {
     const std::string_view t = trim_blanks(cell);
-    if (t.empty()) continue;
-    any = true;
-    if (number_ok) {
-      const ParsedNumber p = parse_number(t);
-      if (p.status == NumberStatus::invalid) number_ok = false;
-      if (p.status == NumberStatus::ok) any_decimal = true;
+    if (is_missing_cell(t, markers) || looks_like_missing_word(t)) continue;
+    ++n;
+    const ParsedNumber p = parse_number(t);
+    if (p.status != NumberStatus::invalid) ++numbers;
+    if (p.status == NumberStatus::ok) ++decimals;
+    const std::optional<DatePrecision> shape = date_shape(t);
+    if (shape == DatePrecision::year) {
+      ++years;
+    } else if (shape && !is_year_span(t)) {
+      ++dated;
+      if (!precision) precision = *shape;
     }
-    if (date_ok) {
-      const std::optional<ParsedDate> d = parse_date(t);
-      if (!d || (precision && *precision != d->precision)) date_ok = false;
-      else precision = d->precision;
-    }
-    if (!number_ok && !date_ok) break;
   }
-  if (!any) return {ColumnType::text, DatePrecision::day};
-  if (date_ok && precision && (*precision != DatePrecision::year || contains_year(column.name)))
-    return {ColumnType::date, *precision};
-  if (number_ok && any_decimal) return {ColumnType::number, DatePrecision::day};
+  if (n == 0) return {ColumnType::text, DatePrecision::day};
+  if (precision && nearly_all(dated, n)) return {ColumnType::date, *precision};
+  if (year_name && nearly_all(years, n)) return {ColumnType::date, DatePrecision::year};
+  if (decimals > 0 && nearly_all(numbers, n)) return {ColumnType::number, DatePrecision::day};
   return {ColumnType::text, DatePrecision::day};
 }
 
 void assign_column_type(Column& column, std::optional<ColumnType> declared,
-                        const std::vector<CellLoc>& locs, const std::string& path) {
-  column.type = declared ? *declared : infer_column_type(column).type;
+                        const std::vector<CellLoc>& locs, const std::string& path,
+                        const std::vector<std::string>& markers) {
+  column.type = declared ? *declared : infer_column_type(column, markers).type;
   column.date_precision = DatePrecision::day;
   column.values.clear();
   if (column.type == ColumnType::text) return;
@@ -170,7 +215,7 @@ void assign_column_type(Column& column, std::optional<ColumnType> declared,
   if (column.type == ColumnType::number) {
     for (std::size_t r = 0; r < column.text.size(); ++r) {
       const std::string_view t = trim_blanks(column.text[r]);
-      if (t.empty()) {
+      if (is_missing_cell(t, markers)) {
         column.values.push_back(kMissing);
         continue;
       }
@@ -180,8 +225,12 @@ void assign_column_type(Column& column, std::optional<ColumnType> declared,
              "forme draws finite numbers only; leave the cell empty for a missing value");
       if (p.status == NumberStatus::invalid) {
         std::string hint = "numbers are plain decimals such as 12, -3.5 or 1e6; leave the cell empty for a missing value";
-        if (t.find(',') != std::string_view::npos) hint = "write numbers without thousands separators, e.g. 1234567";
+        if (looks_like_missing_word(t)) hint = marker_hint(t);
+        else if (t.find(',') != std::string_view::npos) hint = "write numbers without thousands separators, e.g. 1234567";
         else if (t.back() == '%') hint = "write percentages without the % sign";
+        else if (!declared)
+          hint = "the rest of the column holds numbers; if it is a column of names, declare it under the table's "
+                 "'types' as text";
         fail(r, "cell '" + quote_cell(t) + "'" + in_column + " is not a number", std::move(hint));
       }
       column.values.push_back(p.value);
@@ -194,14 +243,19 @@ void assign_column_type(Column& column, std::optional<ColumnType> declared,
   std::size_t first_row = 0;
   for (std::size_t r = 0; r < column.text.size(); ++r) {
     const std::string_view t = trim_blanks(column.text[r]);
-    if (t.empty()) {
+    if (is_missing_cell(t, markers)) {
       column.values.push_back(kMissing);
       continue;
     }
     const std::optional<ParsedDate> d = parse_date(t);
-    if (!d)
-      fail(r, "cell '" + quote_cell(t) + "'" + in_column + " is not a date",
-           "dates are written YYYY, YYYY-MM or YYYY-MM-DD, e.g. 2024-03-31");
+    if (!d) {
+      const std::string why = why_not_a_date(t);
+      std::string hint = "dates are written YYYY, YYYY-MM or YYYY-MM-DD, e.g. 2024-03-31";
+      if (looks_like_missing_word(t)) hint = marker_hint(t);
+      else if (!declared) hint = "the rest of the column holds dates, e.g. '" + first_valid_date(column) + "'";
+      fail(r, "cell '" + quote_cell(t) + "'" + in_column + " is not a date" + (why.empty() ? "" : ": " + why),
+           std::move(hint));
+    }
     if (!precision) {
       precision = d->precision;
       first_row = r;

@@ -113,7 +113,7 @@ Table parse_csv(std::string_view content, const std::string& display_path, const
   if (table.rows == 0) throw InputError(SourceLoc{display_path}, "table has no data rows");
 
   for (std::size_t j = 0; j < width; ++j) {
-    assign_column_type(table.columns[j], declared[j], locs[j], display_path);
+    assign_column_type(table.columns[j], declared[j], locs[j], display_path, options.missing);
     std::vector<CellLoc>().swap(locs[j]);  // free as we go
   }
   return table;

@@ -14,13 +14,16 @@
 /// - Header names are trimmed of spaces and tabs; empty or duplicate names
 ///   are refused. Cell text is kept as written (after unquoting), with each
 ///   line break inside quotes stored as "\n". Entirely empty lines are skipped.
-/// - Types: empty (or blank) cells are missing values, NaN in `values`. A
-///   column is a number column when every other cell is a plain decimal
+/// - Types: empty (or blank) cells, and cells equal to a declared marker
+///   (`CsvOptions::missing`), are missing values, NaN in `values`. A column
+///   is a number column when nearly all other cells are plain decimals
 ///   ("-3.5", "1e6"; no thousands separators or "%"), a date column when
-///   every other cell is a date of one precision, "YYYY-MM-DD" or "YYYY-MM".
-///   Plain four-digit years ("2024") make a date column only when the
-///   column's name contains "year" in any case; otherwise they are numbers.
-///   Anything else, and an all-empty column, is text. "NaN", "inf" or a
+///   nearly all are written as dates, "YYYY-MM-DD" or "YYYY-MM"; the rule
+///   and "nearly all" are in column_types.h. The few other cells are then
+///   errors at their cell. Plain four-digit years ("2024") make a date
+///   column only when the column's name contains "year" in any case;
+///   otherwise they are numbers. Anything else, and an all-empty column, is
+///   text. "NaN", "inf" or a
 ///   decimal too large for a double in a number column is an error: forme
 ///   draws finite numbers only. "-0" reads as 0.
 /// - Refused, each with its location: no header row; no data rows; a row
@@ -35,6 +38,7 @@
 #include <map>
 #include <string>
 #include <string_view>
+#include <vector>
 
 #include "data/table.h"
 
@@ -43,6 +47,9 @@ namespace forme {
 struct CsvOptions {
   /// Declared column types; columns not named here are inferred.
   std::map<std::string, ColumnType, std::less<>> declared;
+  /// Missing-value markers: cells whose text (blanks trimmed) is one of
+  /// these are missing values, like empty cells (see column_types.h).
+  std::vector<std::string> missing;
   /// Refuse files larger than this many bytes before reading them.
   std::size_t max_bytes = 256u * 1024u * 1024u;
 };

@@ -21,7 +21,31 @@ int digits_at(std::string_view text, std::size_t pos, std::size_t n) {
   return v;
 }
 
+const char* const kMonthNames[] = {"January", "February", "March",     "April",   "May",      "June",
+                                  "July",    "August",   "September", "October", "November", "December"};
+
 }  // namespace
+
+std::optional<DatePrecision> date_shape(std::string_view text) {
+  if (digits_at(text, 0, 4) < 0) return std::nullopt;
+  if (text.size() == 4) return DatePrecision::year;
+  if (text.size() < 7 || text[4] != '-' || digits_at(text, 5, 2) < 0) return std::nullopt;
+  if (text.size() == 7) return DatePrecision::month;
+  if (text.size() == 10 && text[7] == '-' && digits_at(text, 8, 2) >= 0) return DatePrecision::day;
+  return std::nullopt;
+}
+
+std::string why_not_a_date(std::string_view text) {
+  const std::optional<DatePrecision> shape = date_shape(text);
+  if (!shape || *shape == DatePrecision::year || parse_date(text)) return {};
+  const int year = digits_at(text, 0, 4);
+  const int month = digits_at(text, 5, 2);
+  if (month < 1 || month > 12) return "there is no month " + std::to_string(month);
+  const int day = digits_at(text, 8, 2);
+  if (day == 0) return "there is no day 0";
+  return std::string(kMonthNames[month - 1]) + " " + std::to_string(year) + " has " +
+         std::to_string(days_in_month(year, month)) + " days";
+}
 
 bool is_leap_year(int year) {
   return year % 4 == 0 && (year % 100 != 0 || year % 400 == 0);

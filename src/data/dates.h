@@ -27,6 +27,16 @@ struct ParsedDate {
 /// refused. For "YYYY" and "YYYY-MM" the day is the period's first day.
 std::optional<ParsedDate> parse_date(std::string_view text);
 
+/// Why `text` is not a date although it is written like one ("YYYY-MM" or
+/// "YYYY-MM-DD" in digits): "there is no month 13", "February 2023 has 28
+/// days". Empty when `text` is a valid date or not written like one.
+std::string why_not_a_date(std::string_view text);
+
+/// The precision `text` is written in when it has the shape of a date,
+/// valid or not: four digits, then "-" and two digits, then optionally "-"
+/// and two digits. A plain "YYYY" is a year. nullopt for any other shape.
+std::optional<DatePrecision> date_shape(std::string_view text);
+
 /// Gregorian rule: every fourth year, except centuries not divisible by 400
 /// (1900 is not a leap year, 2000 is).
 bool is_leap_year(int year);

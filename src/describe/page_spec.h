@@ -164,6 +164,7 @@ struct TableSource {
   std::string path;          ///< resolved against the page file's folder
   std::string display_path;  ///< as written
   std::map<std::string, ColumnType, std::less<>> declared;
+  std::vector<std::string> missing;  ///< cell texts that mean no value (`missing:`)
   SourceLoc loc;
 };
 

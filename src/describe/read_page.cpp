@@ -324,6 +324,8 @@ class Builder {
         t.declared[it->first.Scalar()] =
             ty == "number" ? ColumnType::number : ty == "date" ? ColumnType::date : ColumnType::text;
       }
+    if (n.IsMap() && n["missing"])
+      for (const auto& m : n["missing"]) t.missing.push_back(m.Scalar());
     return t;
   }
 

@@ -86,7 +86,8 @@ struct Schema {
   }();
   NodeSpec table_map = mapping("a table",
       {{"file", &text, true, "CSV file, relative to the page description"},
-       {"types", &types, false, "declared column types, overriding inference"}});
+       {"types", &types, false, "declared column types, overriding inference"},
+       {"missing", &text_list, false, "cell texts that mean no value, e.g. [NA, n/a, \"-\"]; like empty cells, they leave a gap"}});
   NodeSpec table = [&] {
     NodeSpec n = table_map;
     n.what = "a CSV path or a mapping with 'file'";

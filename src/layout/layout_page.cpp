@@ -46,6 +46,15 @@ std::vector<std::string> scale_notes(const std::vector<PanelAxes>& axes) {
   return {};
 }
 
+// The footer's notes: where the data have gaps (each said once), then the scales.
+std::vector<std::string> page_notes(const std::vector<PanelData>& panels, const std::vector<PanelAxes>& axes) {
+  std::vector<std::string> out;
+  for (const auto& p : panels)
+    if (!p.gap_note.empty() && std::find(out.begin(), out.end(), p.gap_note) == out.end()) out.push_back(p.gap_note);
+  for (auto& n : scale_notes(axes)) out.push_back(std::move(n));
+  return out;
+}
+
 SeriesColours colours_of(const PanelLooks& looks) {
   SeriesColours out;
   for (const auto& [name, look] : looks.series) out[name] = look.colour;
@@ -110,7 +119,7 @@ LaidOutPage lay_out_boxes(const PageSpec& spec, const std::vector<PanelData>& pa
   Rect content{mg.left, mg.top, page.width - mg.left - mg.right, page.height - mg.top - mg.bottom};
 
   const double head = set_heading(spec, extended_standfirst(spec, panels), st, content, page);
-  const double foot = set_footer(spec, st, content, page, scale_notes(axes));
+  const double foot = set_footer(spec, st, content, page, page_notes(panels, axes));
   Rect area{content.x, content.y + head, content.w, content.h - head - foot};
 
   const GridShape g = grid_shape(spec.grid, static_cast<int>(panels.size()));

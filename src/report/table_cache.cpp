@@ -6,6 +6,7 @@ std::string TableCache::key(const TableSource& s) {
   // The same file read with different declared types is a different table.
   std::string k = s.path;
   for (const auto& [column, type] : s.declared) k += '\n' + column + '=' + std::to_string(static_cast<int>(type));
+  for (const auto& marker : s.missing) k += "\nmissing=" + marker;  // and with other missing-value markers
   return k;
 }
 

@@ -16,6 +16,9 @@ struct Series {
   std::string name;       ///< empty for a panel with one unnamed series
   std::vector<double> x;  ///< data value, day number, or category index
   std::vector<double> y;
+  /// Gaps in the data: the line breaks before each of these point indices
+  /// (ascending, each in 1..size-1). See series/gaps.h.
+  std::vector<std::size_t> breaks = {};
 };
 
 /// What a transform did, for the page to say.
@@ -49,6 +52,12 @@ struct PanelData {
   std::vector<std::size_t> rows;
   TransformStatement transform;  ///< what was done to the values, if anything
   std::vector<PointName> point_names;  ///< with label-points-by, in table order
+  /// Where the data have no value, in words for the page's notes ("No data
+  /// for Route 7 in 2017 and 2020."); empty when nothing is missing.
+  std::string gap_note;
+  /// The panel's rows with a missing x or y cell (gaps), in table order:
+  /// not plotted, but listed with the plotted rows wherever rows travel.
+  std::vector<std::size_t> gap_rows;
 };
 
 }  // namespace forme

@@ -75,7 +75,9 @@ std::vector<PlottedRows> plotted_rows(const PageSpec& page, const std::vector<Pa
       r.numeric.push_back(c->type == ColumnType::number);
     }
     line(r.columns);
+    // Rows with a gap are listed too, their missing cells as written.
     std::vector<std::size_t> rows = d.rows;
+    rows.insert(rows.end(), d.gap_rows.begin(), d.gap_rows.end());
     std::sort(rows.begin(), rows.end());
     for (std::size_t row : rows) {
       std::vector<std::string> cells;

@@ -2,8 +2,8 @@
 /// The rows each panel plotted, as CSV text a reader can open: the data
 /// behind the chart travel with the page.
 ///
-/// One file per panel. Rows are those the panel drew (after its filters,
-/// without rows whose x or y cell is empty), in table order, exactly as the
+/// One file per panel. Rows are those the panel drew after its filters,
+/// and its rows with a gap (an x or y cell missing), in table order, exactly as the
 /// table's file wrote them; columns are the ones the panel reads (its row
 /// filters, the one-panel-per column, series-by, x and y), in table order.
 /// Values are the data as read, before any stated transform.

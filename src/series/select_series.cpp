@@ -6,6 +6,7 @@
 
 #include "describe/suggest.h"
 #include "series/apply_transform.h"
+#include "series/gaps.h"
 
 namespace forme {
 
@@ -93,6 +94,30 @@ void check_stackable(const PanelSpec& p, const PanelData& d, const Table& t) {
   }
 }
 
+std::size_t count_points(const PanelData& d) {
+  std::size_t n = 0;
+  for (const auto& s : d.series) n += s.x.size();
+  return n;
+}
+
+std::size_t longest_series(const PanelData& d) {
+  std::size_t n = 0;
+  for (const auto& s : d.series) n = std::max(n, s.x.size());
+  return n;
+}
+
+// A transform that leaves nothing would draw an empty chart on a made-up
+// axis: refuse it where the transform is written. `longest` is the longest
+// series before the transform.
+[[noreturn]] void refuse_empty_transform(const PanelSpec& p, const PanelData& d, std::size_t longest) {
+  const std::string panel = d.title.empty() ? std::string("the panel") : "panel '" + d.title + "'";
+  std::string hint = "check the transform against the rows the panel shows";
+  if (p.transform.kind == TransformSpec::Kind::percent_change)
+    hint = "the longest series has " + std::to_string(longest) + (longest == 1 ? " value" : " values") +
+           ", so the lag can be at most " + std::to_string(longest > 0 ? longest - 1 : 0);
+  throw InputError(p.transform.loc, "the transform leaves " + panel + " with no value to show", hint);
+}
+
 PanelData build_panel(const PanelSpec& p, const Table& t, const std::vector<std::size_t>& rows,
                       std::string title) {
   if (p.x.empty()) throw InputError(p.loc, "panel has no 'x' column", "name the column for the horizontal position");
@@ -138,6 +163,7 @@ PanelData build_panel(const PanelSpec& p, const Table& t, const std::vector<std:
   // Rows of one series usually come together: the last series found is
   // tried first, so a million-row table does not search the map per row.
   const std::string no_name;
+  std::vector<MissingCell> missing;
   const std::string* last_name = nullptr;
   std::size_t last_series = 0;
   d.rows.reserve(rows.size());
@@ -155,7 +181,12 @@ PanelData build_panel(const PanelSpec& p, const Table& t, const std::vector<std:
     Series& s = d.series[last_series];
     double x = d.x_kind == AxisKind::category ? category(xc.text[r]) : xc.values[r];
     double y = d.y_kind == AxisKind::category ? category(yc.text[r]) : yc.values[r];
-    if (std::isnan(x) || std::isnan(y)) continue;  // missing cell: a gap, not a zero
+    if (std::isnan(x) || std::isnan(y)) {  // missing cell: a gap, not a zero
+      if (ycat) missing.push_back({sname, y, yc.text[r]});
+      else missing.push_back({sname, x, xc.text[r]});
+      d.gap_rows.push_back(r);
+      continue;
+    }
     if (names && !names->text[r].empty())
       d.point_names.push_back({last_series, s.x.size(), names->text[r], ranks ? ranks->values[r] : 0,
                                SourceLoc{t.path, r < t.row_lines.size() ? t.row_lines[r] : 0, 1}});
@@ -179,7 +210,10 @@ PanelData build_panel(const PanelSpec& p, const Table& t, const std::vector<std:
       }
       s = std::move(sorted);
     }
+  const std::size_t before = count_points(d), longest = longest_series(d);
   d.transform = apply_transform(p.transform, d);
+  if (before > 0 && count_points(d) == 0) refuse_empty_transform(p, d, longest);
+  d.gap_note = mark_gaps(d, missing, d.title.empty() ? p.y.value : d.title);
   if (p.kind == ChartKind::stacked_area) check_stackable(p, d, t);
   rank_priorities(d.point_names);
   return d;
@@ -199,7 +233,7 @@ std::vector<std::size_t> filter_rows(const PanelSpec& p, const Table& t) {
 
 // Says which row filter left a panel empty, at the value written: the first
 // that no row matches on its own, else the filters together.
-void warn_empty_filter(const PanelSpec& p, const Table& t, const std::string& panel_name, DiagnosticSink& warnings) {
+void refuse_empty_filter(const PanelSpec& p, const Table& t, const std::string& panel_name, DiagnosticSink& warnings) {
   for (const auto& [name, value] : p.where) {
     const Column& c = find_column(t, name, "a row filter");
     if (std::find(c.text.begin(), c.text.end(), value.value) != c.text.end()) continue;
@@ -207,16 +241,16 @@ void warn_empty_filter(const PanelSpec& p, const Table& t, const std::string& pa
     if (t.rows == 0) hint = "the table has no rows";
     else hint += "from '" + *std::min_element(c.text.begin(), c.text.end()) + "' to '" +
                  *std::max_element(c.text.begin(), c.text.end()) + "'";
-    warnings.warn(value.loc,
+    warnings.report({Severity::error, value.loc,
                   "no row of table '" + t.name + "' has " + name.value + " = '" + value.value + "', so " + panel_name +
                       " is empty",
-                  hint);
+                  hint});
     return;
   }
-  warnings.warn(p.where.front().second.loc,
-                "no row of table '" + t.name + "' matches all of the panel's 'where' filters, so " + panel_name +
-                    " is empty",
-                "each filter matches some rows on its own; check that they can hold together");
+  warnings.report({Severity::error, p.where.front().second.loc,
+                   "no row of table '" + t.name + "' matches all of the panel's 'where' filters, so " + panel_name +
+                       " is empty",
+                   "each filter matches some rows on its own; check that they can hold together"});
 }
 
 // Panels of one grid are read against one scale, so a category axis lists
@@ -291,8 +325,22 @@ std::vector<PanelData> select_series(const PageSpec& page, const std::vector<Tab
     const PanelData& d = out[i];
     if (d.rows_used > 0) continue;
     const std::string name = d.title.empty() ? "panel " + std::to_string(i + 1) : "panel '" + d.title + "'";
-    if (!d.spec->where.empty()) warn_empty_filter(*d.spec, find_table(page, tables, *d.spec), name, warnings);
-    else warnings.warn(d.spec->loc, name + " has no data to show", "check the table's contents");
+    if (!d.spec->where.empty()) refuse_empty_filter(*d.spec, find_table(page, tables, *d.spec), name, warnings);
+    else
+      warnings.report({Severity::error, d.spec->y.loc,
+                       "column '" + d.spec->y.value + "' has no value in any row " + name + " shows, so it is empty",
+                       "fill in the cells, or leave the panel out"});
+  }
+  // Gaps are said on the page and by `check`, panel by panel.
+  for (PanelData& d : out) {
+    if (d.gap_note.empty()) continue;
+    if (out.size() > 1 && !d.title.empty() && d.gap_note.find("for " + d.title + " ") == std::string::npos)
+      d.gap_note = d.title + ": n" + d.gap_note.substr(1);
+    std::string said = d.gap_note.substr(0, d.gap_note.size() - 1);
+    if (said.rfind("No data", 0) == 0) said[0] = 'n';
+    warnings.report({Severity::note, d.spec->y.loc, said,
+                     d.kind == ChartKind::line ? "the line breaks at each gap; a value standing alone is a dot"
+                                               : "the gaps are left empty"});
   }
   if (out.empty()) throw InputError(page.grid.one_panel_per.loc, "no panels: the table has no rows to split");
   return out;

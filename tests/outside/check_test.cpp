@@ -11,7 +11,7 @@ TEST_CASE("forme check lists every problem of the misleading page, located", "[o
   auto r = run("cd " + std::string(FORME_SOURCE_DIR) + "/tests/pages/misleading && " + FORME_BINARY + " check page.yaml");
   CHECK(r.exit_code == 1);  // the cut bar axis is an error
   const char* expected[] = {
-      "page.yaml:19:23: warning: no row of table 'calls' has district = 'Northholm', so panel 2 is empty",
+      "page.yaml:19:23: error: no row of table 'calls' has district = 'Northholm', so panel 2 is empty",
       "page.yaml:25:12: error: bars must start at zero, so the axis cannot begin at 10",
       "page.yaml:1:1: warning: the page has no source line",
       "page.yaml:6:28: warning: panels do not share one scale",

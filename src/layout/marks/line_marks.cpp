@@ -43,18 +43,26 @@ void draw_line_marks(const MarkContext& ctx, DisplayPage& page) {
   std::vector<std::vector<Point>> drawn;
   for (const auto& s : ctx.data.series) {
     const Rgb colour = ctx.colours.at(s.name);
-    PathItem path;
-    path.role = ShapeRole::data;
-    path.stroke = Stroke{colour, st.line_width(), dash_lengths(ctx.dash(s.name), st.line_width()), true};
-    path.points.reserve(s.x.size());
-    for (std::size_t i = 0; i < s.x.size(); ++i) path.points.push_back({f.px(s.x[i]), f.py(s.y[i])});
-    path.points = simplify_polyline(path.points, kThinning);
-    drawn.push_back(path.points);
-    note_line_marks(path.points, page);
-    if (path.points.size() == 1) {
-      page.add(CircleItem{path.points[0], st.dot_radius(), colour, std::nullopt, ShapeRole::data, {}});
-    } else if (!path.points.empty()) {
-      page.add(std::move(path));
+    // A gap in the data breaks the line: one path per piece between gaps,
+    // a value standing alone drawn as a dot (series/gaps.h).
+    std::size_t from = 0;
+    for (std::size_t b = 0; b <= s.breaks.size(); ++b) {
+      const std::size_t to = b < s.breaks.size() ? s.breaks[b] : s.x.size();
+      if (to <= from) continue;
+      PathItem path;
+      path.role = ShapeRole::data;
+      path.stroke = Stroke{colour, st.line_width(), dash_lengths(ctx.dash(s.name), st.line_width()), true};
+      path.points.reserve(to - from);
+      for (std::size_t i = from; i < to; ++i) path.points.push_back({f.px(s.x[i]), f.py(s.y[i])});
+      from = to;
+      path.points = simplify_polyline(path.points, kThinning);
+      drawn.push_back(path.points);
+      note_line_marks(path.points, page);
+      if (path.points.size() == 1) {
+        page.add(CircleItem{path.points[0], st.dot_radius(), colour, std::nullopt, ShapeRole::data, {}});
+      } else if (!path.points.empty()) {
+        page.add(std::move(path));
+      }
     }
     if (!s.x.empty() && !s.name.empty()) ends.push_back({{f.px(s.x.back()), f.py(s.y.back())}, colour, &s.name});
   }

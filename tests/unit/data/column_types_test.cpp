@@ -3,6 +3,7 @@
 
 #include <cmath>
 
+#include "unit/data/csv_test_support.h"
 #include "data/column_types.h"
 #include "data/csv_reader.h"
 #include "data/dates.h"
@@ -104,10 +105,10 @@ TEST_CASE("inference: an all-empty column is text", "[data][types]") {
 
 TEST_CASE("inference: dates by day or by month", "[data][types]") {
   const Table t = parse_csv(
-      "day,month,mixed,bad\n"
-      "2024-01-31,2024-01,2024-01-31,2024-01-31\n"
-      ",2024-02,2024-02,2024-02-30\n"
-      " 2024-02-29 ,2023-12,2024-03-01,2024-03-01\n",
+      "day,month\n"
+      "2024-01-31,2024-01\n"
+      ",2024-02\n"
+      " 2024-02-29 ,2023-12\n",
       "t.csv");
   const forme::Column& day = col(t, "day");
   CHECK(day.type == ColumnType::date);
@@ -121,9 +122,15 @@ TEST_CASE("inference: dates by day or by month", "[data][types]") {
   CHECK(month.type == ColumnType::date);
   CHECK(month.date_precision == DatePrecision::month);
   CHECK(month.values[1] == static_cast<double>(forme::days_from_civil(2024, 2, 1)));
+}
 
-  CHECK(col(t, "mixed").type == ColumnType::text);  // mixed precision
-  CHECK(col(t, "bad").type == ColumnType::text);    // 2024-02-30 is no date
+TEST_CASE("inference: a date of another precision or one that does not exist is an error, not text", "[data][types]") {
+  // Each column is written as dates, so it is a date column and the odd
+  // cell is refused where it stands (2024 is a leap year: Gregorian rule).
+  CHECK(forme::test::csv_error("mixed\n2024-01-31\n2024-02\n2024-03-01\n") ==
+        "t.csv:3:1: error: date '2024-02' in column 'mixed' is by month (YYYY-MM) but the column is by day (YYYY-MM-DD)");
+  CHECK(forme::test::csv_error("bad\n2024-01-31\n2024-02-30\n2024-03-01\n") ==
+        "t.csv:3:1: error: cell '2024-02-30' in column 'bad' is not a date: February 2024 has 29 days");
 }
 
 TEST_CASE("inference: four-digit years are dates only in a column named for years", "[data][types]") {

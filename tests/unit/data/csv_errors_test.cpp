@@ -131,7 +131,7 @@ TEST_CASE("csv error: declared date column with a non-date or mixed precision", 
   CsvOptions o;
   o.declared["when"] = ColumnType::date;
   CHECK(csv_error("when\n2024-01-05\n2024-02-30\n", o) ==
-        "t.csv:3:1: error: cell '2024-02-30' in column 'when' is not a date");
+        "t.csv:3:1: error: cell '2024-02-30' in column 'when' is not a date: February 2024 has 29 days");
   CHECK(csv_error("when\n2024-01-05\n\n2024-02\n", o) ==
         "t.csv:4:1: error: date '2024-02' in column 'when' is by month (YYYY-MM) but the column is by day (YYYY-MM-DD)");
 }
