@@ -191,6 +191,9 @@ void label_log_ticks(Axis& a, const std::vector<double>& ticks, const std::optio
   a.format = asked.value_or(NumberFormat{});
   a.format.decimals = -1;
   a.values = values_format(a.format, asked ? asked->decimals : -1);
+  // Values beside marks on an axis read in powers are written in powers too
+  // (6.4×10⁶, not 6,400,000 beside 10⁶).
+  if (log_labels_in_powers(ticks, asked)) a.values.style = NumberFormat::Style::power_of_ten;
   a.ticks.clear();
   const std::vector<std::string> labels = log_tick_labels(ticks, asked);
   for (std::size_t i = 0; i < ticks.size(); ++i) a.ticks.push_back({ticks[i], labels[i], false});

@@ -39,15 +39,19 @@ std::string power_label(double v, const NumberFormat& asked) {
 
 }  // namespace
 
+bool log_labels_in_powers(const std::vector<double>& ticks, const std::optional<NumberFormat>& asked) {
+  const NumberFormat::Style style = asked ? asked->style : NumberFormat::Style::plain;
+  if (style == NumberFormat::Style::power_of_ten) return true;
+  if (style != NumberFormat::Style::plain) return false;
+  return std::any_of(ticks.begin(), ticks.end(), [](double v) { return v < 1e-3 * (1 - 1e-12) || v > 1e4 * (1 + 1e-12); });
+}
+
 std::vector<std::string> log_tick_labels(const std::vector<double>& ticks, const std::optional<NumberFormat>& asked) {
   NumberFormat f = asked.value_or(NumberFormat{});
   f.decimals = -1;
   f.significant = 0;
   f.own_power = false;
-  bool powers = f.style == NumberFormat::Style::power_of_ten;
-  if (f.style == NumberFormat::Style::plain)
-    for (double v : ticks)
-      if (v < 1e-3 * (1 - 1e-12) || v > 1e4 * (1 + 1e-12)) powers = true;
+  const bool powers = log_labels_in_powers(ticks, asked);
   std::vector<std::string> out;
   for (double v : ticks) out.push_back(powers ? power_label(v, f) : format_number(v, f));
   return out;

@@ -24,6 +24,9 @@ namespace forme {
 /// fixed count cannot show 0.001 and 1,000 both as they are).
 std::vector<std::string> log_tick_labels(const std::vector<double>& ticks, const std::optional<NumberFormat>& asked);
 
+/// Whether log_tick_labels writes these ticks as powers of ten.
+bool log_labels_in_powers(const std::vector<double>& ticks, const std::optional<NumberFormat>& asked);
+
 /// Unlabelled minor ticks inside [lo, hi] between the labelled `major`
 /// ones: the decades a thinned axis leaves unlabelled; on an axis labelled
 /// at every decade, 2…9 × each power when it spans at most `most_decades`

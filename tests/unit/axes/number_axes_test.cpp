@@ -49,6 +49,10 @@ TEST_CASE("a log axis from 1e-4 to 1e6 is labelled at its powers of ten", "[axes
   CHECK(a.hi == 1e6);
   // The skipped decades are minor ticks.
   CHECK(a.minor == std::vector<double>{1e-3, 1e-1, 10, 1e3, 1e5});
+  // Values beside marks are written in powers too, each against its own (worked by hand).
+  const forme::NumberFormat v = forme::value_format({6.4e5, 1e-4}, a.values);
+  CHECK(forme::format_number(6.4e5, v) == "6.4×10⁵");
+  CHECK(forme::format_number(1e-4, v) == "1×10⁻⁴");
 }
 
 TEST_CASE("a log axis over twenty decades stays compact", "[axes][log]") {
