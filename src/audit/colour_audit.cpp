@@ -26,11 +26,71 @@ bool separated(ChartKind kind, const SeriesLook& a, const SeriesLook& b) {
   return false;  // dots carry colour only
 }
 
+// One pair of series, in one panel, that some readers cannot tell apart.
+struct HardPair {
+  std::string a, b;
+  std::size_t panel = 0;
+  ChartKind kind = ChartKind::line;
+  std::vector<Vision> failed;
+  double worst = 0;
+};
+
+std::string hint_for(ChartKind kind) {
+  const bool bars = kind == ChartKind::vertical_bar || kind == ChartKind::horizontal_bar;
+  return kind == ChartKind::dot
+             ? "give them colours further apart in lightness, or split them into panels"
+             : std::string("give them colours further apart in lightness, or 'colours: {patterns: true}' to add ") +
+                   (bars ? "fill patterns" : "dashes");
+}
+
+// Pairs that share one cause (the colours chosen at one place) are one
+// finding: one pair as itself, many as the series involved and a count per
+// vision, so twenty series give one warning, not seventy-five.
+void tell_pairs(const SourceLoc& loc, const std::vector<HardPair>& pairs, DiagnosticSink& out) {
+  double worst = 1e300;
+  for (const auto& p : pairs) worst = std::min(worst, p.worst);
+  const std::string below = ": CIEDE2000 difference " + std::string(pairs.size() > 1 ? "as low as " : "") +
+                            fixed(worst, 1) + ", below " + fixed(kSeriesDeltaE, 0) + " (common practice)";
+  if (pairs.size() == 1) {
+    const HardPair& p = pairs.front();
+    std::string failed;
+    for (Vision v : p.failed) failed += (failed.empty() ? "" : ", ") + std::string(to_string(v));
+    out.warn(loc, "series " + quoted(p.a) + " and " + quoted(p.b) + " in panel " + std::to_string(p.panel + 1) +
+                      " are hard to tell apart (" + failed + ")" + below,
+             hint_for(p.kind));
+    return;
+  }
+  std::vector<std::string> names;
+  for (const auto& p : pairs)
+    for (const std::string* n : {&p.a, &p.b})
+      if (std::find(names.begin(), names.end(), *n) == names.end()) names.push_back(*n);
+  constexpr std::size_t kNamed = 6;  // enough to recognise the group on one line
+  std::string list;
+  for (std::size_t i = 0; i < names.size() && i < kNamed; ++i) list += (i ? ", " : "") + quoted(names[i]);
+  if (names.size() > kNamed) list += " and " + std::to_string(names.size() - kNamed) + " more";
+  std::string counts;
+  for (Vision v : all_visions) {
+    std::size_t n = 0;
+    for (const auto& p : pairs) n += std::count(p.failed.begin(), p.failed.end(), v);
+    if (n) counts += (counts.empty() ? "" : ", ") + std::to_string(n) + " " + std::string(to_string(v));
+  }
+  std::set<std::size_t> in;
+  for (const auto& p : pairs) in.insert(p.panel);
+  const std::string where = in.size() == 1 ? "in panel " + std::to_string(*in.begin() + 1)
+                                           : "over " + std::to_string(in.size()) + " panels";
+  out.warn(loc,
+           std::to_string(pairs.size()) + " pairs of series " + where + " are hard to tell apart (" + counts +
+               "), among " + list + below,
+           hint_for(pairs.front().kind) + "; with this many series, small multiples or fewer series read better");
+}
+
 void audit_series(const std::vector<PanelData>& panels, const std::vector<PanelLooks>& looks, const Rgb& paper,
                   bool greyscale, DiagnosticSink& out) {
   // One-panel-per grids repeat the same pairs in every panel: say each once.
   std::set<std::tuple<std::string, std::string, int, int>> said;
   std::set<std::pair<std::string, int>> said_paper;
+  // Hard pairs by where their colours were chosen, in the order found.
+  std::vector<std::pair<SourceLoc, std::vector<HardPair>>> causes;
   for (std::size_t i = 0; i < panels.size(); ++i) {
     const auto& series = panels[i].series;
     const PanelLooks& pl = looks[i];
@@ -49,28 +109,24 @@ void audit_series(const std::vector<PanelData>& panels, const std::vector<PanelL
         const SeriesLook& la = pl.series.at(series[a].name);
         const SeriesLook& lb = pl.series.at(series[b].name);
         if (separated(panels[i].kind, la, lb)) continue;
-        std::string failed;
-        double worst = 1e300;
+        HardPair hp{series[a].name, series[b].name, i, panels[i].kind, {}, 1e300};
         for (Vision v : all_visions) {
           if (greyscale && v != Vision::greyscale) continue;
           const double d = delta_e(as_seen(la.colour, v), as_seen(lb.colour, v));
           if (d >= kSeriesDeltaE) continue;
-          failed += (failed.empty() ? "" : ", ") + std::string(to_string(v));
-          worst = std::min(worst, d);
+          hp.failed.push_back(v);
+          hp.worst = std::min(hp.worst, d);
         }
-        if (failed.empty()) continue;
+        if (hp.failed.empty()) continue;
         if (!said.insert({series[a].name, series[b].name, lb.loc.line, lb.loc.col}).second) continue;
-        const bool bars = panels[i].kind == ChartKind::vertical_bar || panels[i].kind == ChartKind::horizontal_bar;
-        out.warn(lb.loc,
-                 "series " + quoted(series[a].name) + " and " + quoted(series[b].name) + " in panel " +
-                     std::to_string(i + 1) + " are hard to tell apart (" + failed + "): CIEDE2000 difference " +
-                     fixed(worst, 1) + ", below " + fixed(kSeriesDeltaE, 0) + " (common practice)",
-                 panels[i].kind == ChartKind::dot
-                     ? "give them colours further apart in lightness, or split them into panels"
-                     : std::string("give them colours further apart in lightness, or 'colours: {patterns: true}' to add ") +
-                           (bars ? "fill patterns" : "dashes"));
+        auto c = std::find_if(causes.begin(), causes.end(), [&](const auto& k) {
+          return k.first.file == lb.loc.file && k.first.line == lb.loc.line && k.first.col == lb.loc.col;
+        });
+        if (c == causes.end()) c = causes.insert(causes.end(), {lb.loc, {}});
+        c->second.push_back(std::move(hp));
       }
   }
+  for (const auto& [loc, pairs] : causes) tell_pairs(loc, pairs, out);
 }
 
 // A looked-for series that no panel shows is most likely a typo.

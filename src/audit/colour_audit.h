@@ -16,7 +16,9 @@
 ///   text from 14 pt is large text too in WCAG; forme holds it to 4.5:1,
 ///   the stricter reading.
 /// Findings are located at the series' colour (its entry under
-/// `colours.series`, or the palette), else the panel, else the page.
+/// `colours.series`, or the palette), else the panel, else the page. Pairs
+/// whose colours were chosen at one place are one finding: one pair as
+/// itself, more as a count of pairs per vision among the series named.
 #include <vector>
 
 #include "base/diagnostic.h"

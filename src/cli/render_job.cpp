@@ -25,6 +25,7 @@
 #include "layout/layout_page.h"
 #include "layout/page_style.h"
 #include "layout/press_sheet.h"
+#include "layout/series_looks.h"
 #include "paint/atomic_file.h"
 #include "paint/greyscale.h"
 #include "paint/pdf_dates.h"
@@ -49,6 +50,15 @@ PageStyle style_for_page(const PageSpec& spec, const FontSet& fonts) {
   st.ink = Inks{ink::text, ink::muted, ink::rule, ink::grid, spec.sheet.press.background.value_or(Rgb{1, 1, 1})};
   st.series = default_categorical().colours;
   return st;
+}
+
+Margins composed_margins(const PageSpec& spec, const PageStyle& style) {
+  // Default margins grow with type set larger than 8 pt (posters), so the
+  // page keeps its proportions; margins the page states stay as stated.
+  Margins m = spec.sheet.margins;
+  if (spec.sheet.margins_stated || style.base <= 8) return m;
+  const double k = style.base / 8;
+  return {m.top * k, m.right * k, m.bottom * k, m.left * k};
 }
 
 Table load_table(const TableSource& src, const Limits& limits) {
@@ -139,15 +149,10 @@ ComposedDocument compose_spec(PageSpec spec, const std::vector<Table>& tables, c
   audit_page(spec, panels, axes, sink);
   lap(&StageTimes::scales);
   PageStyle style = style_for_page(spec, fonts);                    // 4. measure text (fonts)
-  // Default margins grow with type set larger than 8 pt (posters), so the
-  // page keeps its proportions; margins the page states stay as stated.
-  if (!spec.sheet.margins_stated && style.base > 8) {
-    Margins& m = spec.sheet.margins;
-    const double k = style.base / 8;
-    m = {m.top * k, m.right * k, m.bottom * k, m.left * k};
-  }
+  spec.sheet.margins = composed_margins(spec, style);
   if (spec.sheet.height_from_content) spec.sheet.height = content_height(spec, panels, axes, style);
   ComposedDocument doc;
+  doc.margins = spec.sheet.margins;
   LaidOutPage laid = lay_out_boxes(spec, panels, axes, style, sink);  // 5. lay out boxes
   lap(&StageTimes::layout);
   place_movable_text(laid.movables, style, laid.page, sink);          // 6. place labels
@@ -173,6 +178,11 @@ ComposedDocument compose_spec(PageSpec spec, const std::vector<Table>& tables, c
                      "the document would have " + std::to_string(doc.pages.size()) + " pages, more than the " +
                          std::to_string(limits.pages) + " one document may hold",
                      "filter the rows set in the table pages, or raise the limit with '--limit pages=N'");
+  // The palette place each series took, which a report keeps on later pages.
+  const std::vector<PanelLooks> looks = assign_looks(spec, panels);
+  for (std::size_t i = 0; i < looks.size() && i < panels.size(); ++i)
+    for (const auto& [name, look] : looks[i].series)
+      if (look.place) doc.series_places.emplace(series_identity(name, *panels[i].spec), *look.place);
   doc.info = document_info(spec, plotted);
   doc.info.description = describe_chart(spec, panels, axes);
   // Each panel in words, for the tagged PDF's figure alternate text.
@@ -271,6 +281,7 @@ RenderResult render_file(const RenderOptions& o) {
       ro.font_dir = o.font_dir;
       ro.limits = o.limits;
       ro.progress = o.progress;
+      ro.greyscale = o.greyscale;
       ro.creation_time = parse_source_date_epoch(std::getenv("SOURCE_DATE_EPOCH"));
       // Straight into the output's temporary file: a report of any length
       // is never held in memory whole.

@@ -2,6 +2,7 @@
 /// The driver: runs the stages of one render in order. Reading this file
 /// top to bottom is reading how a page is made.
 #include <functional>
+#include <map>
 #include <optional>
 #include <string>
 #include <vector>
@@ -53,7 +54,17 @@ RenderResult check_file(const std::string& page_path, const std::string& font_di
 struct ComposedDocument {
   std::vector<DisplayPage> pages;
   DocumentInfo info;
+  /// The margins the pages were laid out with (composed_margins), measured
+  /// from each page's trim box: where a report sets its running head and foot.
+  Margins margins;
+  /// Each series' own name → its place in a categorical palette
+  /// (layout/series_looks.h), for a report to keep on later pages.
+  std::map<std::string, std::size_t> series_places;
 };
+
+/// The margins a page is laid out with: as stated, or the defaults grown
+/// with type set larger than 8 pt (posters) so the page keeps its proportions.
+Margins composed_margins(const PageSpec& spec, const PageStyle& style);
 
 /// Runs every stage up to painting; `greyscale` (or the page's
 /// colours.greyscale) paints every page in grey. Throws InputError.

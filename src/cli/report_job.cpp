@@ -1,11 +1,17 @@
 #include "cli/report_job.h"
 
 #include <chrono>
+#include <cstdlib>
+#include <ctime>
 #include <map>
 #include <sstream>
 
+#include "base/fixed_decimals.h"
 #include "base/lookahead.h"
 #include "cli/render_job.h"
+#include "layout/press_sheet.h"
+#include "paint/greyscale.h"
+#include "paint/pdf_dates.h"
 #include "paint/painter.h"
 #include "report/contents_page.h"
 #include "report/cover_page.h"
@@ -68,13 +74,34 @@ std::vector<OutlineEntry> outline(const ReportSpec& report, const std::vector<Pl
   return out;
 }
 
-// Cover and contents in lower-case roman numerals, the rest counted on in
-// figures from the physical page number, so the label a reader's page box
-// shows is the number printed in the foot.
-std::vector<PageLabelRange> page_labels(std::size_t front_pages) {
-  if (front_pages == 0) return {{0, PageNumberStyle::decimal, 1}};
-  return {{0, PageNumberStyle::lower_roman, 1},
-          {front_pages, PageNumberStyle::decimal, static_cast<int>(front_pages) + 1}};
+// A series keeps the palette place it first took on every later page of
+// the report, so one name wears one colour throughout.
+void keep_places(std::map<std::string, std::size_t>& places, const ComposedDocument& doc) {
+  for (const auto& [name, place] : doc.series_places) places.emplace(name, place);
+}
+
+// Every page, cover and contents too, labelled in figures from 1: the foot
+// prints "page N of M" on each, so the label a reader's page box shows is
+// the number printed on the page.
+std::vector<PageLabelRange> page_labels() { return {{0, PageNumberStyle::decimal, 1}}; }
+
+// The running head and foot sit in the top and bottom margins; a margin
+// that cannot hold a line of them is an error, not a head cut by the trim
+// or set over the content.
+void check_running_room(const PageSpec& spec, const Margins& m, const PageStyle& style) {
+  const double need = running_text_height(style) * 1.5;  // the line and a little white each side
+  const double room = std::min(m.top, m.bottom);
+  if (room >= need) return;
+  const std::string which = m.top <= m.bottom ? "top" : "bottom";
+  throw InputError(spec.sheet.loc.line ? spec.sheet.loc : spec.loc,
+                   "a report's running head and foot need " + fixed(need, 1) + " pt of top and bottom margin at this type size, but the " +
+                       which + " margin is " + fixed(room, 1) + " pt",
+                   "give the sheet larger margins (e.g. 'margins: 15mm'), or set the page in a smaller type size");
+}
+
+void check_running_room(const PageSpec& spec, const FontSet& fonts) {
+  const PageStyle style = style_for_page(spec, fonts);
+  check_running_room(spec, composed_margins(spec, style), style);
 }
 
 // `n` with leading zeros to as many digits as `largest`, so file names
@@ -105,11 +132,15 @@ void check_report(const std::string& path, DiagnosticSink& sink, const Limits& l
   TableCache cache([&](const TableSource& s) { return load_table(s, limits); });
   std::vector<PlannedPage> plan = plan_report(report, cache, limits);
   const FontSet fonts = open_bundled_fonts(font_dir);
+  std::map<std::string, std::size_t> places;  // as render_report keeps them
   for (auto& page : plan) {
     DiagnosticSink found;
     std::vector<Table> tables = take_tables(page, cache);
     try {
-      compose_spec(planned_spec(report, page, limits), tables, fonts, found, limits, nullptr, greyscale);
+      PageSpec spec = planned_spec(report, page, limits);
+      check_running_room(spec, fonts);
+      spec.colours.kept = places;
+      keep_places(places, compose_spec(std::move(spec), tables, fonts, found, limits, nullptr, greyscale));
     } catch (...) {
       merge(sink, found);  // the findings before the error, then the error itself
       throw;
@@ -137,6 +168,9 @@ void render_report(const std::string& path, DiagnosticSink& sink, const ReportRu
   const FontSet fonts = open_bundled_fonts(o.font_dir);
   times.read += since(t0);
 
+  // Series' palette places, kept from page to page. Pages followed by table
+  // pages take theirs first; after that only the composing thread uses it.
+  std::map<std::string, std::size_t> places;
   // A page followed by table pages is composed now, to count them.
   std::map<std::size_t, Composed> early;  // by plan index; few pages have table pages
   std::vector<Placement> at(plan.size());
@@ -145,16 +179,23 @@ void render_report(const std::string& path, DiagnosticSink& sink, const ReportRu
     Composed& c = early[i];
     t0 = std::chrono::steady_clock::now();
     c.spec = planned_spec(report, plan[i], o.limits);
+    check_running_room(c.spec, fonts);
     std::vector<Table> tables = take_tables(plan[i], cache);
     times.data += since(t0);
-    c.doc = compose_spec(c.spec, tables, fonts, c.found, o.limits, &times);
+    c.spec.colours.kept = places;
+    c.doc = compose_spec(c.spec, tables, fonts, c.found, o.limits, &times, o.greyscale);
+    keep_places(places, c.doc);
     at[i].count = c.doc.pages.size();
   }
 
   // Number the pages: contents first, then every page in order.
   const PageSpec first_spec = planned_spec(report, plan.front(), o.limits);
   const PageStyle contents_style = style_for_page(first_spec, fonts);
-  const ContentsSheet sheet{first_spec.sheet.width, first_spec.sheet.height, first_spec.sheet.margins};
+  // The cover and contents take the first page's sheet, margins (as it is
+  // laid out with them) and press sheet, so they cut and read like it.
+  const Margins front_margins = composed_margins(first_spec, contents_style);
+  check_running_room(first_spec, front_margins, contents_style);
+  const ContentsSheet sheet{first_spec.sheet.width, first_spec.sheet.height, front_margins};
   std::size_t contents = 0;
   if (report.contents) {
     const std::size_t rows = contents_rows(report, plan, at).size();
@@ -174,7 +215,7 @@ void render_report(const std::string& path, DiagnosticSink& sink, const ReportRu
   po.info.keywords = report.document.keywords;
   po.info.creation_time = o.creation_time;
   po.info.outline = outline(report, plan, at, front, contents);
-  po.info.page_labels = page_labels(front);
+  po.info.page_labels = page_labels();
   auto painter = make_painter(OutputFormat::pdf, out, po);
 
   std::size_t done = 0;
@@ -191,6 +232,7 @@ void render_report(const std::string& path, DiagnosticSink& sink, const ReportRu
     text.page = done + 1;
     text.pages = total;
     add_running_text(page, margins, text, style);
+    if (o.greyscale) page = in_greyscale(std::move(page));  // the running text and the front pages too
     if (o.painting) o.painting(page);
     const auto p0 = std::chrono::steady_clock::now();
     painter->paint(page);                                              // 7. paint
@@ -199,14 +241,22 @@ void render_report(const std::string& path, DiagnosticSink& sink, const ReportRu
     if (o.progress) o.progress(done, total);
   };
 
+  const long long today = parse_source_date_epoch(std::getenv("SOURCE_DATE_EPOCH")).value_or(std::time(nullptr));
+  auto on_press_sheet = [&](DisplayPage page) {
+    const PressSpec& press = first_spec.sheet.press;
+    const std::string slug = press.slug.empty() ? std::string() : slug_line(press.slug, today, done + 1, total);
+    return to_press_sheet(std::move(page), press, contents_style, slug);
+  };
   if (report.cover) {
-    DisplayPage page = cover_page(report.cover_title.empty() ? report.title : report.cover_title,
-                                  report.cover_lines, sheet, contents_style);
+    DisplayPage page = on_press_sheet(cover_page(report.cover_title.empty() ? report.title : report.cover_title,
+                                                 report.cover_lines, sheet, contents_style));
     paint(page, sheet.margins, contents_style, "", false);
   }
   if (contents > 0)
-    for (auto& page : contents_pages(report.contents_title, contents_rows(report, plan, at), sheet, contents_style))
+    for (auto& page : contents_pages(report.contents_title, contents_rows(report, plan, at), sheet, contents_style)) {
+      page = on_press_sheet(std::move(page));
       paint(page, sheet.margins, contents_style, report.contents_title);
+    }
 
   // Later pages are composed on a second thread while earlier ones are
   // painted. Only that thread builds descriptions and uses the table cache
@@ -216,11 +266,14 @@ void render_report(const std::string& path, DiagnosticSink& sink, const ReportRu
     Composed c;
     const auto r0 = std::chrono::steady_clock::now();
     c.spec = planned_spec(report, plan[i], o.limits);                  // 1b. the page's description
+    check_running_room(c.spec, fonts);
     times.read += since(r0);
     const auto d0 = std::chrono::steady_clock::now();
     std::vector<Table> tables = take_tables(plan[i], cache);           // 2. load data
     times.data += since(d0);
-    c.doc = compose_spec(c.spec, tables, fonts, c.found, o.limits, &times);  // 2b-6. series, scales, layout, labels
+    c.spec.colours.kept = places;
+    c.doc = compose_spec(c.spec, tables, fonts, c.found, o.limits, &times, o.greyscale);  // 2b-6. series, scales, layout, labels
+    keep_places(places, c.doc);
     return c;
   };
   // Two pages ahead evens out pages that take longer to compose than to
@@ -239,7 +292,7 @@ void render_report(const std::string& path, DiagnosticSink& sink, const ReportRu
     }
     const PageStyle style = style_for_page(c.spec, fonts);
     for (auto& page : c.doc.pages)
-      paint(page, c.spec.sheet.margins, style, report.sections[plan[i].section].title);
+      paint(page, c.doc.margins, style, report.sections[plan[i].section].title);
   }
   const auto f0 = std::chrono::steady_clock::now();
   painter->finish();

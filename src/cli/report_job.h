@@ -23,6 +23,8 @@ struct ReportRunOptions {
   Limits limits;
   /// Compose the next page while painting this one (two threads).
   bool overlap = true;
+  /// Paint every page in grey, the cover and contents too (`--greyscale`).
+  bool greyscale = false;
   /// Called after each page is painted: pages done, pages in all.
   std::function<void(std::size_t done, std::size_t total)> progress;
   /// The document's date (seconds since 1970, UTC); nullopt = now.

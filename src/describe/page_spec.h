@@ -116,6 +116,10 @@ struct ColourSpec {
   std::optional<bool> patterns;       ///< also tell series apart by dash (lines) and fill pattern (bars)
   SourceLoc patterns_loc;
   std::vector<SeriesLookSpec> series; ///< explicit looks by series name
+  /// Set by a report, not read from the description: the place in a
+  /// categorical palette each series name took on earlier pages, which it
+  /// keeps on this one where it can (layout/series_looks.h).
+  std::map<std::string, std::size_t> kept;
   SourceLoc loc;
 };
 

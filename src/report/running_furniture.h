@@ -21,9 +21,20 @@ struct RunningText {
 /// "page N of M".
 std::string page_n_of_m(std::size_t page, std::size_t pages);
 
-/// Adds the running head and foot to `page`, inside `margins` of its sheet.
-/// A left text that would meet the right one is left out (the right one,
-/// the section or page number, matters more).
+/// The trimmed page: its trim box on a press sheet, else the whole sheet.
+Rect trimmed(const DisplayPage& page);
+
+/// The page's content box: the trimmed page less `margins`.
+Rect content_box(const DisplayPage& page, const Margins& margins);
+
+/// The height of one line of running text, ascender to descender, in points.
+double running_text_height(const PageStyle& style);
+
+/// Adds the running head and foot to `page`, centred in the top and bottom
+/// `margins` of its trimmed page (the margins it was laid out with) and
+/// running from the content's left edge to its right. A left text that would
+/// meet the right one is left out (the right one, the section or page
+/// number, matters more).
 void add_running_text(DisplayPage& page, const Margins& margins, const RunningText& text, const PageStyle& style);
 
 }  // namespace forme

@@ -7,6 +7,7 @@
 #include <cmath>
 #include <cstdio>
 #include <set>
+#include <tuple>
 
 #include "colour/contrast.h"
 #include "colour/convert.h"
@@ -105,21 +106,102 @@ TEST_CASE("one-sided diverging series keep the step size of the fuller arm", "[l
   CHECK(s.at("2").colour == five[4]);
 }
 
-TEST_CASE("more series than a named palette keeps distinct is an error at the palette, with a hint", "[looks]") {
-  PageSpec page;
-  page.colours.palette = at("estuary", 4, 12);
+TEST_CASE("more series than palette colours is one error at the series-by key, named palette or not", "[looks]") {
   PanelSpec spec;
+  spec.series_by = at("kind", 9, 14);
   std::vector<PanelData> panels{panel_of(spec, {"a", "b", "c", "d", "e", "f", "g", "h", "i"})};
-  try {
-    assign_looks(page, panels);
-    FAIL("no error");
-  } catch (const InputError& e) {
-    CHECK(e.diagnostic().loc.line == 4);
-    CHECK(e.diagnostic().loc.col == 12);
-    CHECK(e.diagnostic().message == "9 series are more classes than palette 'estuary' keeps distinct as series colours (at most 8)");
-    CHECK(e.diagnostic().hint.find("group") != std::string::npos);
-    CHECK(e.diagnostic().hint.find("name each line directly") != std::string::npos);
+  std::vector<Diagnostic> told;
+  for (bool named : {false, true}) {
+    PageSpec page;
+    if (named) page.colours.palette = at("estuary", 4, 12);
+    try {
+      assign_looks(page, panels);
+      FAIL("no error");
+    } catch (const InputError& e) {
+      told.push_back(e.diagnostic());
+    }
   }
+  REQUIRE(told.size() == 2);
+  for (const Diagnostic& d : told) {
+    CHECK(d.loc.line == 9);
+    CHECK(d.loc.col == 14);
+    // estuary has eight colours (palette.h); pinned text.
+    CHECK(d.message == "9 series but palette 'estuary' has 8 colours: beyond 8, series would share a colour");
+    CHECK(d.hint.find("'grid: {one-panel-per: kind}'") != std::string::npos);
+    CHECK(d.hint.find("highlight one series") != std::string::npos);
+    CHECK(d.hint.find("'colours: {patterns: true}' (up to 40 series)") != std::string::npos);
+  }
+  CHECK(told[0].hint == told[1].hint);
+  // Eight series fit, named or not.
+  std::vector<PanelData> eight{panel_of(spec, {"a", "b", "c", "d", "e", "f", "g", "h"})};
+  CHECK_NOTHROW(assign_looks(PageSpec{}, eight));
+  // Series counted over the whole page: two panels of five different names.
+  std::vector<PanelData> two{panel_of(spec, {"a", "b", "c", "d", "e"}), panel_of(spec, {"f", "g", "h", "i", "j"})};
+  CHECK_THROWS_WITH(assign_looks(PageSpec{}, two), Catch::Contains("error: 10 series but palette 'estuary'"));
+}
+
+TEST_CASE("with patterns, eight colours and five dashes tell 40 series apart, and no more", "[looks]") {
+  PageSpec page;
+  page.colours.patterns = true;
+  PanelSpec spec;
+  spec.series_by = at("route", 5, 3);
+  std::vector<std::string> names;
+  for (int i = 0; i < 40; ++i) names.push_back("r" + std::to_string(i));
+  auto s = assign_looks(page, {panel_of(spec, names)})[0].series;
+  std::set<std::pair<std::tuple<double, double, double>, int>> looks;
+  for (const auto& [name, look] : s)
+    looks.insert({{look.colour.r, look.colour.g, look.colour.b}, static_cast<int>(look.dash)});
+  CHECK(looks.size() == 40);  // lcm(8, 5): every (colour, dash) pair once
+  names.push_back("r40");
+  CHECK_THROWS_WITH(assign_looks(page, {panel_of(spec, names)}),
+                    Catch::Contains("41 series but palette 'estuary' has 8 colours and 5 dashes, 40 distinct looks: beyond 40, series would share a look"));
+}
+
+TEST_CASE("a series renamed by a difference keeps its own colour and dash on every panel", "[looks]") {
+  PageSpec page;
+  page.colours.patterns = true;
+  PanelSpec plain, less;
+  less.transform.kind = TransformSpec::Kind::difference;
+  less.transform.minus = at("Mill", 8, 20);
+  std::vector<PanelData> panels{panel_of(plain, {"Mill", "Quay", "Kiln"}),
+                                panel_of(less, {"Quay \u2212 Mill", "Kiln \u2212 Mill"})};
+  auto looks = assign_looks(page, panels);
+  for (const char* n : {"Quay", "Kiln"}) {
+    INFO(n);
+    const auto& a = looks[0].series.at(n);
+    const auto& b = looks[1].series.at(std::string(n) + " \u2212 Mill");
+    CHECK(a.colour == b.colour);
+    CHECK(a.dash == b.dash);
+  }
+  CHECK(series_identity("Quay \u2212 Mill", less) == "Quay");
+  CHECK(series_identity("Quay \u2212 Mill", plain) == "Quay \u2212 Mill");
+  // A panel showing only a later series gives it the page's dash, not its own first.
+  std::vector<PanelData> apart{panel_of(plain, {"Mill", "Quay"}), panel_of(plain, {"Quay"})};
+  auto l2 = assign_looks(page, apart);
+  CHECK(l2[1].series.at("Quay").dash == l2[0].series.at("Quay").dash);
+  CHECK(l2[1].series.at("Quay").dash != DashStyle::solid);
+}
+
+TEST_CASE("a report's kept places hold a series' colour, and new names take unused ones", "[looks]") {
+  PanelSpec spec;
+  PageSpec first;
+  auto one = assign_looks(first, {panel_of(spec, {"Ash", "Birch", "Cedar"})})[0].series;
+  PageSpec later;
+  for (const auto& [name, look] : one) later.colours.kept.emplace(name, *look.place);
+  // Cedar alone, then Cedar beside a newcomer: Cedar keeps its colour; the
+  // newcomer takes the first colour no earlier page gave.
+  auto two = assign_looks(later, {panel_of(spec, {"Cedar", "Dune"})})[0].series;
+  const auto& estuary = default_categorical().colours;
+  CHECK(two.at("Cedar").colour == one.at("Cedar").colour);
+  CHECK(two.at("Dune").colour == estuary[3]);
+  // Without a report's places, page order decides: Cedar first.
+  auto alone = assign_looks(PageSpec{}, {panel_of(spec, {"Cedar", "Dune"})})[0].series;
+  CHECK(alone.at("Cedar").colour == estuary[0]);
+}
+
+TEST_CASE("graded palettes keep their own limits, told at the palette", "[looks]") {
+  PageSpec page;
+  PanelSpec spec;
   page.colours.palette = at("heath", 4, 12);
   const std::size_t most = series_stops(*find_palette("heath"), Rgb{1, 1, 1}).size();
   std::vector<std::string> many;
