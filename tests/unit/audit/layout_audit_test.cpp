@@ -95,7 +95,7 @@ TEST_CASE("a value wholly inside its bar is fine, one across the bar's end is no
   CHECK(f.front().subject == "57");
 }
 
-TEST_CASE("a data line or reference line through text is found; a gridline is not", "[audit][layout]") {
+TEST_CASE("a data line or reference line through text is found, a gridline is not", "[audit][layout]") {
   DisplayPage p = a5();
   p.add(text("Gridline below", 100, 100));
   p.add(line({50, 97}, {300, 97}, ShapeRole::grid, 0.5, Rgb{0.5, 0.5, 0.5}));
@@ -137,7 +137,7 @@ TEST_CASE("a callout's paper box over a bar is found", "[audit][layout]") {
   CHECK(count(find_layout_faults(p), LayoutFault::callout_over_data) == 1);
 }
 
-TEST_CASE("a leader crossing a reference line is found; one ending on its own dot is not", "[audit][layout]") {
+TEST_CASE("a leader crossing a reference line is found, one ending on its own dot is not", "[audit][layout]") {
   DisplayPage p = a5();
   p.add(CircleItem{{100, 100}, 2, Rgb{0.2, 0.4, 0.7}, std::nullopt, ShapeRole::data, {}});
   p.add(line({102, 100}, {160, 140}, ShapeRole::leader, 0.4, Rgb{0.3, 0.3, 0.3}));
