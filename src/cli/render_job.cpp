@@ -8,6 +8,7 @@
 #include <cstdlib>
 #include <ctime>
 #include <filesystem>
+#include <limits>
 #include <optional>
 #include <span>
 #include <sstream>
@@ -24,6 +25,7 @@
 #include "layout/content_height.h"
 #include "layout/layout_page.h"
 #include "layout/page_style.h"
+#include "layout/page_language.h"
 #include "layout/press_sheet.h"
 #include "layout/series_looks.h"
 #include "paint/atomic_file.h"
@@ -96,6 +98,7 @@ DocumentInfo document_info(const PageSpec& spec, const std::vector<PlottedRows>&
   info.author = spec.document.author;
   info.subject = spec.document.subject;
   info.keywords = spec.document.keywords;
+  info.language = spec.language.value;
   if (spec.data.attach)
     for (const auto& p : plotted) info.attachments.push_back({p.file_name, p.description, "text/csv", p.csv});
   return info;
@@ -156,6 +159,7 @@ ComposedDocument compose_spec(PageSpec spec, const std::vector<Table>& tables, c
   LaidOutPage laid = lay_out_boxes(spec, panels, axes, style, sink);  // 5. lay out boxes
   lap(&StageTimes::layout);
   place_movable_text(laid.movables, style, laid.page, sink);          // 6. place labels
+  apply_page_language(laid.page, spec.language.value);              // lines of mixed direction read in the page's
   lap(&StageTimes::place);
   doc.pages.push_back(std::move(laid.page));
   audit_layout(spec, doc.pages.front(), sink, limits);
@@ -173,6 +177,11 @@ ComposedDocument compose_spec(PageSpec spec, const std::vector<Table>& tables, c
       spec.data.attach || spec.data.table_page ? plotted_rows(spec, panels, tables) : std::vector<PlottedRows>{};
   if (spec.data.table_page)
     for (auto& p : data_table_pages(spec, plotted, style)) doc.pages.push_back(std::move(p));
+  // Table pages are read like the chart: nothing off the sheet, nothing
+  // over anything. Their cells are not labels, so the label limit is not theirs.
+  Limits table_limits = limits;
+  table_limits.labels = std::numeric_limits<std::size_t>::max();
+  for (std::size_t i = 1; i < doc.pages.size(); ++i) audit_layout(spec, doc.pages[i], sink, table_limits);
   if (doc.pages.size() > limits.pages)
     throw InputError(spec.loc,
                      "the document would have " + std::to_string(doc.pages.size()) + " pages, more than the " +
