@@ -33,11 +33,12 @@ struct HardPair {
   ChartKind kind = ChartKind::line;
   std::vector<Vision> failed;
   double worst = 0;
+  bool patterned = false;  ///< the panel's series already wear dashes or patterns
 };
 
-std::string hint_for(ChartKind kind) {
+std::string hint_for(ChartKind kind, bool patterned) {
   const bool bars = kind == ChartKind::vertical_bar || kind == ChartKind::horizontal_bar;
-  return kind == ChartKind::dot
+  return kind == ChartKind::dot || patterned
              ? "give them colours further apart in lightness, or split them into panels"
              : std::string("give them colours further apart in lightness, or 'colours: {patterns: true}' to add ") +
                    (bars ? "fill patterns" : "dashes");
@@ -57,7 +58,7 @@ void tell_pairs(const SourceLoc& loc, const std::vector<HardPair>& pairs, Diagno
     for (Vision v : p.failed) failed += (failed.empty() ? "" : ", ") + std::string(to_string(v));
     out.warn(loc, "series " + quoted(p.a) + " and " + quoted(p.b) + " in panel " + std::to_string(p.panel + 1) +
                       " are hard to tell apart (" + failed + ")" + below,
-             hint_for(p.kind));
+             hint_for(p.kind, p.patterned));
     return;
   }
   std::vector<std::string> names;
@@ -81,7 +82,7 @@ void tell_pairs(const SourceLoc& loc, const std::vector<HardPair>& pairs, Diagno
   out.warn(loc,
            std::to_string(pairs.size()) + " pairs of series " + where + " are hard to tell apart (" + counts +
                "), among " + list + below,
-           hint_for(pairs.front().kind) + "; with this many series, small multiples or fewer series read better");
+           hint_for(pairs.front().kind, pairs.front().patterned) + "; with this many series, small multiples or fewer series read better");
 }
 
 void audit_series(const std::vector<PanelData>& panels, const std::vector<PanelLooks>& looks, const Rgb& paper,
@@ -104,12 +105,15 @@ void audit_series(const std::vector<PanelData>& panels, const std::vector<PanelL
                      ":1, below the 3:1 that WCAG 2.x SC 1.4.11 asks of graphics",
                  "choose a colour further from the paper's, or a palette whose colours all reach 3:1 on white such as 'estuary'");
     }
+    bool patterned = false;
+    for (const auto& [name, look] : pl.series)
+      patterned = patterned || look.dash != DashStyle::solid || look.pattern != FillPattern::plain;
     for (std::size_t a = 0; a < series.size(); ++a)
       for (std::size_t b = a + 1; b < series.size(); ++b) {
         const SeriesLook& la = pl.series.at(series[a].name);
         const SeriesLook& lb = pl.series.at(series[b].name);
         if (separated(panels[i].kind, la, lb)) continue;
-        HardPair hp{series[a].name, series[b].name, i, panels[i].kind, {}, 1e300};
+        HardPair hp{series[a].name, series[b].name, i, panels[i].kind, {}, 1e300, patterned};
         for (Vision v : all_visions) {
           if (greyscale && v != Vision::greyscale) continue;
           const double d = delta_e(as_seen(la.colour, v), as_seen(lb.colour, v));

@@ -246,3 +246,30 @@ TEST_CASE("twenty line series give one colour-pair finding, not one per pair", "
   CHECK(std::stoi(r.err.substr(count_at, pairs - count_at)) > 1);
   CHECK(r.err.find(" more: CIEDE2000 difference as low as ") != std::string::npos);
 }
+
+TEST_CASE("a report page whose margins cannot hold the running head is a located error, and no file", "[outside][identity][report]") {
+  TempDir dir;
+  write_file(dir.file("t.csv"), "month,riders\n2026-01,10\n2026-02,12\n2026-03,11\n");
+  write_file(dir.file("report.yaml"),
+             "title: Narrow margins\n"
+             "sections:\n"
+             "  - title: One\n"
+             "    pages:\n"
+             "      - page:\n"
+             "          sheet: {size: A5, margins: 4mm, bleed: 3mm}\n"
+             "          type: {size: 12pt}\n"
+             "          heading: {title: Riders}\n"
+             "          tables: {t: t.csv}\n"
+             "          panel: {kind: line, table: t, x: month, y: riders, y-unit: riders}\n"
+             "          source: \"Source: invented for this test\"\n");
+  auto r = run_forme("render '" + dir.file("report.yaml") + "' -o '" + dir.file("r.pdf") + "'");
+  CHECK(r.exit_code == 1);
+  const std::string first = r.err.substr(0, r.err.find('\n'));
+  // Located at the page's sheet (line 6, where `sheet:` starts its value).
+  CHECK(first.find("report.yaml:6:") != std::string::npos);
+  CHECK(first.find("error: a report's running head and foot need ") != std::string::npos);
+  // 4 mm = 4 / 25.4 × 72 pt = 11.3 pt (the millimetre and the PostScript point).
+  CHECK(first.find("but the top margin is 11.3 pt") != std::string::npos);
+  CHECK(r.err.find("hint: give the sheet larger margins") != std::string::npos);
+  CHECK_FALSE(run("test -e '" + dir.file("r.pdf") + "'").exit_code == 0);
+}
