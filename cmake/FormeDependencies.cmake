@@ -3,7 +3,8 @@
 # files; yaml-cpp and CLI11 ship CMake packages.
 find_package(PkgConfig REQUIRED)
 pkg_check_modules(CAIRO REQUIRED IMPORTED_TARGET cairo cairo-pdf cairo-svg cairo-png cairo-ft)
-pkg_check_modules(HARFBUZZ REQUIRED IMPORTED_TARGET harfbuzz)
+# harfbuzz-subset (part of libharfbuzz-dev): cuts the fonts an SVG carries down to the characters it sets.
+pkg_check_modules(HARFBUZZ REQUIRED IMPORTED_TARGET harfbuzz harfbuzz-subset)
 pkg_check_modules(FREETYPE REQUIRED IMPORTED_TARGET freetype2)
 # libunibreak: Unicode line breaking (UAX #14) for wrapped notes and callouts.
 pkg_check_modules(UNIBREAK REQUIRED IMPORTED_TARGET libunibreak)

@@ -213,6 +213,7 @@ void render_report(const std::string& path, DiagnosticSink& sink, const ReportRu
   po.info.author = report.document.author;
   po.info.subject = report.document.subject;
   po.info.keywords = report.document.keywords;
+  po.info.language = report.language.value;
   po.info.creation_time = o.creation_time;
   po.info.outline = outline(report, plan, at, front, contents);
   po.info.page_labels = page_labels();

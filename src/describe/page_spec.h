@@ -216,6 +216,9 @@ struct PageSpec {
   SourceLoc footer_loc;   ///< the source note (or notes, limitations), likewise
   ColourSpec colours;    ///< the page's palette and series looks
   bool greyscale = false;  ///< painted in grey, for black-and-white printing
+  /// The text's language, a BCP 47 tag (e.g. "en-GB"); empty: not stated.
+  /// Sets the PDF /Lang, the SVG lang and the base direction of the text.
+  Located language;
   SourceLoc loc;
 };
 

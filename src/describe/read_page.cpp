@@ -11,6 +11,7 @@
 #include "describe/lengths.h"
 #include "describe/schema.h"
 #include "describe/validate.h"
+#include "text/language.h"
 
 namespace forme {
 
@@ -100,6 +101,7 @@ class Builder {
       p.colours = colours(c, ColourSpec{});
       if (c["greyscale"]) p.greyscale = c["greyscale"].Scalar() == "true";
     }
+    if (auto l = r["language"]) p.language = language(l);
     return p;
   }
 
@@ -117,6 +119,17 @@ class Builder {
   Located located(const YAML::Node& n) const {
     if (!n) return {};
     return {n.Scalar(), doc_.loc(n)};
+  }
+
+  // A language tag of the shape RFC 5646 §2.1 gives; the registry itself
+  // is not consulted, so a well-formed tag for a rare language is kept.
+  Located language(const YAML::Node& n) const {
+    Located l = located(n);
+    const std::string why = language_tag_problem(l.value);
+    if (!why.empty())
+      throw InputError(l.loc, "'" + l.value + "' is not a language tag: " + why,
+                       "write a BCP 47 tag: a language, then optionally a script and a region, e.g. en-GB, he, ar-EG, sr-Latn");
+    return l;
   }
 
   // A link target must name its scheme (RFC 3986 §3.1: a letter, then

@@ -282,7 +282,8 @@ struct Schema {
        {"data", &data, false, "whether the PDF carries the plotted rows: attached CSV files, a table page"},
        {"type", &type, false, "type sizes: by job, by reading distance, or each stated"},
        {"marks", &marks, false, "line widths, tick length and dot size (default: in proportion to the type)"},
-       {"colours", &page_colours, false, "palette, series colours, dashes and patterns, greyscale printing"}});
+       {"colours", &page_colours, false, "palette, series colours, dashes and patterns, greyscale printing"},
+       {"language", &text, false, "the language the page's text is in, a BCP 47 tag such as en-GB, he or ar-EG: sets the PDF and SVG language and the direction lines of mixed scripts read in"}});
 
   // A report: many pages in one PDF, in sections, each page a page
   // description (a file or written inline), optionally one per value of a column.
@@ -324,6 +325,7 @@ struct Schema {
        {"contents", &boolean, false, "start with contents pages listing sections and pages (default true)"},
        {"contents-title", &text, false, "heading of the contents pages (default: Contents)"},
        {"document", &document, false, "author, subject and keywords for the PDF's document information"},
+       {"language", &text, false, "the language of the report's text, a BCP 47 tag such as en-GB: the PDF's language and each page's unless the page states its own"},
        {"sections", &sections, true, "the report's sections, in order"}});
 };
 

@@ -6,6 +6,8 @@
 #include <cmath>
 #include <vector>
 
+#include "paint/hatch_geometry.h"
+
 namespace forme {
 
 namespace {
@@ -39,24 +41,6 @@ void trace(cairo_t* cr, const PathItem& p) {
   if (p.closed) cairo_close_path(cr);
 }
 
-// Parallel lines at `angle` through the box, `spacing` apart, anchored to
-// the page origin so neighbouring shapes' patterns line up.
-void hatch_lines(cairo_t* cr, double x0, double y0, double x1, double y1, double angle, double spacing) {
-  const double a = angle * 3.141592653589793 / 180;
-  const double dx = std::cos(a), dy = -std::sin(a);  // along the line (page y runs down)
-  const double nx = -dy, ny = dx;                    // across the lines
-  double lo = 1e300, hi = -1e300;
-  for (double x : {x0, x1})
-    for (double y : {y0, y1}) lo = std::min(lo, x * nx + y * ny), hi = std::max(hi, x * nx + y * ny);
-  const double reach = std::hypot(x1 - x0, y1 - y0) + spacing;
-  for (double d = std::floor(lo / spacing) * spacing; d <= hi + spacing; d += spacing) {
-    const double cx = nx * d + dx * (x0 * dx + y0 * dy), cy = ny * d + dy * (x0 * dx + y0 * dy);
-    const double span = reach + std::abs(x1 - x0) + std::abs(y1 - y0);
-    cairo_move_to(cr, cx - dx * span, cy - dy * span);
-    cairo_line_to(cr, cx + dx * span, cy + dy * span);
-  }
-}
-
 // The pattern is real vector drawing (strokes and dots under a clip), so it
 // stays sharp at any zoom and prints as line work.
 void draw_hatch(cairo_t* cr, const PathItem& p, const Hatch& h) {
@@ -67,19 +51,16 @@ void draw_hatch(cairo_t* cr, const PathItem& p, const Hatch& h) {
   cairo_clip(cr);
   set_colour(cr, h.ink);
   if (h.kind == Hatch::Kind::dots) {
-    const double s = h.spacing;
-    for (double y = std::floor(y0 / s) * s; y <= y1 + s; y += s) {
-      // Alternate rows shift by half a step: an even, staggered field.
-      const bool odd = static_cast<long>(std::lround(y / s)) % 2 != 0;
-      for (double x = std::floor(x0 / s) * s + (odd ? s / 2 : 0); x <= x1 + s; x += s) {
-        cairo_new_sub_path(cr);
-        cairo_arc(cr, x, y, h.width / 2, 0, 6.283185307179586);
-      }
+    for (const Point& c : hatch_dots(x0, y0, x1, y1, h.spacing)) {
+      cairo_new_sub_path(cr);
+      cairo_arc(cr, c.x, c.y, h.width / 2, 0, 6.283185307179586);
     }
     cairo_fill(cr);
   } else {
-    hatch_lines(cr, x0, y0, x1, y1, h.angle, h.spacing);
-    if (h.kind == Hatch::Kind::crossed) hatch_lines(cr, x0, y0, x1, y1, h.angle + 90, h.spacing);
+    for (const auto& [from, to] : hatch_segments(x0, y0, x1, y1, h)) {
+      cairo_move_to(cr, from.x, from.y);
+      cairo_line_to(cr, to.x, to.y);
+    }
     cairo_set_line_width(cr, h.width);
     cairo_set_line_cap(cr, CAIRO_LINE_CAP_BUTT);
     cairo_set_dash(cr, nullptr, 0, 0);
@@ -117,41 +98,43 @@ void draw(cairo_t* cr, const CircleItem& c) {
 // maps every glyph back to the characters it came from: text stays
 // searchable even where the font substitutes ligatures or contextual forms.
 // Each run is one font and one direction, drawn with its own bytes.
+//
+// A right-to-left run is shown in logical order: its glyphs go into the
+// content stream from the right end leftwards, each at its own place, so a
+// reader that follows the content stream (mupdf) and one that orders by
+// position and then applies the bidi algorithm (poppler) both read the
+// characters as written. A marked-content span with /ActualText (ISO
+// 32000-1 §14.9.4) was tried and measured: poppler 22.12 reverses an
+// /ActualText of Hebrew as if it were in visual order, and mupdf 1.21 and
+// Ghostscript 10.0 txtwrite ignore it, so it made every reader worse.
 void draw_run(cairo_t* cr, const TextItem& t, const GlyphRun& run) {
   const ShapedText& s = t.text;
   cairo_set_font_face(cr, run.font->cairo_face());
   cairo_set_font_size(cr, s.size);
 
-  std::vector<cairo_glyph_t> glyphs;
-  for (std::size_t i = run.glyph_begin; i < run.glyph_end; ++i)
-    glyphs.push_back({s.glyphs[i].index, t.origin.x + s.glyphs[i].x, t.origin.y + s.glyphs[i].y});
-
   // HarfBuzz clusters are byte offsets, one per glyph, monotone in visual
   // order (rising left to right, falling in a right-to-left run). Cairo
-  // wants (bytes, glyphs) pairs in the order the glyphs are drawn.
+  // wants (bytes, glyphs) pairs in the order the glyphs are shown, which
+  // is logical order either way; a cluster runs from its start to the
+  // next larger start (or the run's end).
+  std::vector<std::size_t> order;  // glyph indices in logical order
+  for (std::size_t i = run.glyph_begin; i < run.glyph_end; ++i) order.push_back(i);
+  if (run.rtl) std::reverse(order.begin(), order.end());
+  std::vector<cairo_glyph_t> glyphs;
+  for (std::size_t i : order) glyphs.push_back({s.glyphs[i].index, t.origin.x + s.glyphs[i].x, t.origin.y + s.glyphs[i].y});
   std::vector<cairo_text_cluster_t> clusters;
-  std::vector<unsigned> starts;
-  std::size_t i = run.glyph_begin;
-  while (i < run.glyph_end) {
-    const unsigned c = s.glyphs[i].cluster;
-    std::size_t j = i;
-    while (j < run.glyph_end && s.glyphs[j].cluster == c) ++j;
-    clusters.push_back({0, static_cast<int>(j - i)});
-    starts.push_back(c);
-    i = j;
+  std::size_t k = 0;
+  while (k < order.size()) {
+    const unsigned c = s.glyphs[order[k]].cluster;
+    std::size_t j = k;
+    while (j < order.size() && s.glyphs[order[j]].cluster == c) ++j;
+    const unsigned next = j < order.size() ? s.glyphs[order[j]].cluster : static_cast<unsigned>(run.byte_end);
+    clusters.push_back({static_cast<int>(next - c), static_cast<int>(j - k)});
+    k = j;
   }
-  // A cluster runs from its start to the next larger start (or the run's end).
-  for (std::size_t k = 0; k < clusters.size(); ++k) {
-    unsigned next = static_cast<unsigned>(run.byte_end);
-    if (!run.rtl && k + 1 < clusters.size()) next = starts[k + 1];
-    if (run.rtl && k > 0) next = starts[k - 1];
-    clusters[k].num_bytes = static_cast<int>(next - starts[k]);
-  }
-  const auto flags = run.rtl ? CAIRO_TEXT_CLUSTER_FLAG_BACKWARD : static_cast<cairo_text_cluster_flags_t>(0);
-  if (run.rtl) std::reverse(clusters.begin(), clusters.end());  // backward: clusters listed from the run's end
   cairo_show_text_glyphs(cr, s.utf8.data() + run.byte_begin, static_cast<int>(run.byte_end - run.byte_begin),
                          glyphs.data(), static_cast<int>(glyphs.size()), clusters.data(),
-                         static_cast<int>(clusters.size()), flags);
+                         static_cast<int>(clusters.size()), static_cast<cairo_text_cluster_flags_t>(0));
 }
 
 void draw(cairo_t* cr, const TextItem& t) {

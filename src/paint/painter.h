@@ -46,6 +46,9 @@ struct DocumentInfo {
   std::string creator = "forme";
   std::string author, subject;        ///< PDF document information
   std::vector<std::string> keywords;  ///< PDF document information, joined by ", "
+  /// The text's language, a BCP 47 tag: the PDF catalog's /Lang (ISO
+  /// 32000-1 §14.9.2) and the SVG root's lang and xml:lang; empty writes none.
+  std::string language;
   /// What the page shows, in sentences: an SVG's <desc> (its <title> is `title`).
   std::string description;
   /// Files a PDF carries (PDF only; other formats ignore them).

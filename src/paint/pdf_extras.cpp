@@ -186,7 +186,8 @@ std::string label_tree(const std::vector<PageLabelRange>& labels) {
 
 void write_pdf_with_extras(std::FILE* cairo_pdf, const std::string& date, const AttachmentSpool& files,
                            const std::vector<PageLinks>& pages, TextSpool& figure_alts,
-                           const std::vector<PageLabelRange>& labels, std::ostream& out) {
+                           const std::vector<PageLabelRange>& labels, const std::string& language,
+                           std::ostream& out) {
   try {
     const pdf::FileReader file(cairo_pdf);
     pdf::Update update(file);
@@ -206,6 +207,9 @@ void write_pdf_with_extras(std::FILE* cairo_pdf, const std::string& date, const 
     edit_pages(file, update, catalog, pages);
     if (figure_alts.size() > 0) add_figure_alts(file, update, catalog, figure_alts);
     if (!labels.empty()) catalog.text = dict_with(catalog.text, "/PageLabels", label_tree(labels));
+    // The natural language of the document's text (§14.9.2.1), a BCP 47
+    // tag as a text string; readers and screen readers pick it up here.
+    if (!language.empty()) catalog.text = dict_with(catalog.text, "/Lang", pdf::text_string(language));
     if (catalog.text != original_catalog) update.replace(catalog.number, catalog.text);
 
     update.write(cairo_pdf, out);

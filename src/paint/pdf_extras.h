@@ -18,7 +18,9 @@
 ///    /BleedBox rectangles (§14.11.2) in the page dictionary;
 ///  - each link becomes a /Link annotation (§12.5.6.5) with a URI action
 ///    (§12.6.4.7) and no border, in the page's /Annots array.
-///  - page labels become the catalog's /PageLabels number tree (§12.4.2).
+///  - page labels become the catalog's /PageLabels number tree (§12.4.2);
+///  - the document's language (a BCP 47 tag) becomes the catalog's /Lang
+///    (§14.9.2): Cairo 1.16 has no call for it.
 /// Nothing added depends on the clock, so the same page still gives the
 /// same bytes.
 #include <cstdio>
@@ -47,12 +49,14 @@ struct PageLinks {
 /// `D:20240229120000Z`), with `files` embedded, `pages[i]`'s links on page i, and
 /// the k-th string of `figure_alts` as the alternate text (/Alt, ISO 32000-1 §14.9.3) of
 /// the k-th /Figure structure element in document order (Cairo 1.16
-/// writes structure tags without attributes). Objects are read from the
+/// writes structure tags without attributes), and `language` (empty: none)
+/// as the catalog's /Lang. Objects are read from the
 /// file one at a time as they are needed and the result goes straight to
 /// `out`, so a long report is never held in memory whole. Throws
 /// std::runtime_error if the file cannot be read or written.
 void write_pdf_with_extras(std::FILE* cairo_pdf, const std::string& date, const AttachmentSpool& files,
                            const std::vector<PageLinks>& pages, TextSpool& figure_alts,
-                           const std::vector<PageLabelRange>& labels, std::ostream& out);
+                           const std::vector<PageLabelRange>& labels, const std::string& language,
+                           std::ostream& out);
 
 }  // namespace forme

@@ -86,7 +86,7 @@ class PdfPainter final : public Painter {
     surface_ = nullptr;
     if (std::fflush(spool_) != 0 || std::ferror(spool_)) throw std::runtime_error("PDF file: temporary file write failed");
     write_pdf_with_extras(spool_, date_, attachments_, links_, alts_,
-                          options_.info.page_labels, out_);
+                          options_.info.page_labels, options_.info.language, out_);
     if (!out_) throw std::runtime_error("PDF file: write failed");
   }
 

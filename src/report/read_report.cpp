@@ -5,6 +5,7 @@
 #include "describe/schema.h"
 #include "describe/validate.h"
 #include "report/placeholders.h"
+#include "text/language.h"
 
 namespace forme {
 
@@ -54,6 +55,13 @@ class ReportBuilder {
       if (d["subject"]) s.document.subject = d["subject"].Scalar();
       if (auto k = d["keywords"])
         for (const auto& w : k) s.document.keywords.push_back(w.Scalar());
+    }
+    if (auto l = r["language"]) {
+      s.language = located(l);
+      // The same rule as a page's language (RFC 5646 §2.1 shape).
+      if (const std::string why = language_tag_problem(s.language.value); !why.empty())
+        errors_.push_back({Severity::error, s.language.loc, "'" + s.language.value + "' is not a language tag: " + why,
+                           "write a BCP 47 tag: a language, then optionally a script and a region, e.g. en-GB, he, ar-EG, sr-Latn"});
     }
     for (const auto& sec : r["sections"]) s.sections.push_back(section(sec, s.base_dir));
     std::size_t entries = 0;

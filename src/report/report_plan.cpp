@@ -81,7 +81,9 @@ std::vector<PlannedPage> plan_report(const ReportSpec& report, TableCache& cache
 }
 
 PageSpec planned_spec(const ReportSpec& report, const PlannedPage& page, const Limits& limits) {
-  return build_filled(report.sections[page.section].pages[page.entry].page, page.values, limits);
+  PageSpec spec = build_filled(report.sections[page.section].pages[page.entry].page, page.values, limits);
+  if (spec.language.empty()) spec.language = report.language;  // a page's own language wins
+  return spec;
 }
 
 std::vector<Table> take_tables(PlannedPage& page, TableCache& cache) {

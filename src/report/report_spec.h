@@ -46,6 +46,7 @@ struct ReportSpec {
   bool contents = true;
   std::string contents_title = "Contents";
   DocumentSpec document;
+  Located language;  ///< BCP 47 tag: the PDF's /Lang, and each page's language unless it states one
   std::vector<ReportSection> sections;
 };
 

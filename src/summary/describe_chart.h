@@ -6,7 +6,9 @@
 ///
 /// Example: "Line chart of Stored (% of capacity) by month. 3 series: 2024,
 /// 2025, 2026. 6 panels, one per reservoir, on one shared scale. Panel
-/// 'North': 36 rows, Stored from 41 to 97."
+/// 'North': 36 rows, Stored from 41 to 97." A category axis is named as
+/// categories ("6 branch categories, from Alderbrook to Wyndle Cross"), and
+/// panels are said to share a scale only when their resolved domains agree.
 #include <span>
 #include <string>
 

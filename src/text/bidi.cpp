@@ -7,7 +7,7 @@
 
 namespace forme {
 
-std::vector<int> bidi_levels(const std::u32string& line) {
+std::vector<int> bidi_levels(const std::u32string& line, BaseDirection base) {
   const auto n = static_cast<FriBidiStrIndex>(line.size());
   std::vector<int> out(line.size(), 0);
   if (line.empty()) return out;
@@ -17,7 +17,9 @@ std::vector<int> bidi_levels(const std::u32string& line) {
   std::vector<FriBidiLevel> levels(line.size());
   fribidi_get_bidi_types(chars.data(), n, types.data());
   fribidi_get_bracket_types(chars.data(), n, types.data(), brackets.data());
-  FriBidiParType direction = FRIBIDI_PAR_ON;  // from the first strong character
+  FriBidiParType direction = base == BaseDirection::left_to_right   ? FRIBIDI_PAR_LTR
+                             : base == BaseDirection::right_to_left ? FRIBIDI_PAR_RTL
+                                                                    : FRIBIDI_PAR_ON;  // ON: from the first strong character
   if (fribidi_get_par_embedding_levels_ex(types.data(), brackets.data(), n, &direction, levels.data()) == 0)
     return out;  // FriBidi could not allocate: keep the logical order
   std::copy(levels.begin(), levels.end(), out.begin());

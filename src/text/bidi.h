@@ -7,10 +7,15 @@
 
 namespace forme {
 
+/// A paragraph's base direction: from its first strong character (UAX #9
+/// rules P2, P3), or stated (by the page's language, rule HL1).
+enum class BaseDirection { from_text, left_to_right, right_to_left };
+
 /// Embedding level of each character of one line (even: left to right,
-/// odd: right to left). The paragraph direction comes from the first
-/// strong character (UAX #9 rules P2, P3); a line with none is left to right.
-std::vector<int> bidi_levels(const std::u32string& line);
+/// odd: right to left). With `base` from_text the paragraph direction comes
+/// from the first strong character and a line with none is left to right;
+/// otherwise `base` is the paragraph direction.
+std::vector<int> bidi_levels(const std::u32string& line, BaseDirection base = BaseDirection::from_text);
 
 /// Rule L2 over runs: given each run's level in logical order, the order
 /// in which to set them from left to right (indices into `levels`).

@@ -114,6 +114,7 @@ ShapedText shape_text(const std::string& text, const FontRef& font, double size,
   out.utf8 = utf8;
   out.font = font;
   out.size = size;
+  out.options = options;
   out.ascent = font->ascent_em() * size;
   out.descent = font->descent_em() * size;
   out.cap_height = font->cap_height_em() * size;
@@ -123,7 +124,7 @@ ShapedText shape_text(const std::string& text, const FontRef& font, double size,
   std::u32string cps;
   cps.reserve(chars.size());
   for (const auto& c : chars) cps.push_back(c.cp);
-  const std::vector<int> levels = bidi_levels(cps);
+  const std::vector<int> levels = bidi_levels(cps, options.direction);
   out.rtl = *std::min_element(levels.begin(), levels.end()) % 2 == 1;
   const std::vector<LogicalRun> runs = itemise(chars, levels, font, out.missing);
   std::vector<int> run_levels;

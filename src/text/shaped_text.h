@@ -5,6 +5,7 @@
 #include <string>
 #include <vector>
 
+#include "text/bidi.h"
 #include "text/font.h"
 
 namespace forme {
@@ -14,6 +15,13 @@ struct ShapedGlyph {
   double x = 0, y = 0;  ///< pen position relative to the run origin, points (y down)
   double advance = 0;   ///< horizontal advance, points
   unsigned cluster = 0; ///< byte offset into the UTF-8 string
+};
+
+/// OpenType features forme asks for, and the paragraph direction.
+struct ShapeOptions {
+  bool tabular_figures = false;  ///< 'tnum': equal-width digits for numbers in columns
+  bool kerning = true;           ///< 'kern'
+  BaseDirection direction = BaseDirection::from_text;  ///< the page's language may state it
 };
 
 /// Consecutive glyphs (in visual order) from one font and one direction,
@@ -40,15 +48,11 @@ struct ShapedText {
   double descent = 0;  ///< font descender at this size (positive, points)
   double cap_height = 0;
   bool rtl = false;  ///< the line's paragraph direction is right to left
+  ShapeOptions options;  ///< as shaped, so the line can be shaped again in another direction
 
   double height() const { return ascent + descent; }
 };
 
-/// OpenType features forme asks for.
-struct ShapeOptions {
-  bool tabular_figures = false;  ///< 'tnum': equal-width digits for numbers in columns
-  bool kerning = true;           ///< 'kern'
-};
 
 /// Shapes one line of `utf8` with HarfBuzz: split into runs by bidi level
 /// (UAX #9), script and font (the asked-for font, else an installed one

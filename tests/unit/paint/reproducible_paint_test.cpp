@@ -1,6 +1,6 @@
 // Painting the same display list twice, in one process, gives the same bytes
 // in every format once the document date is fixed. One process is the hard
-// case: Cairo numbers some SVG ids from a process-wide counter. The PDF date
+// case: a painter may not number anything from a process-wide counter. The PDF date
 // form is ISO 32000-1 §7.9.4.
 #include <catch2/catch.hpp>
 #include <algorithm>
@@ -12,7 +12,6 @@
 #include "cli/render_job.h"
 #include "paint/painter.h"
 #include "paint/pdf_dates.h"
-#include "paint/svg_ids.h"
 #include "text/font.h"
 
 namespace {
@@ -70,34 +69,4 @@ TEST_CASE("without a stated date the PDF is dated at the time of painting", "[pa
   // between the two clock readings.
   CHECK(date >= forme::pdf_date_utc(before));
   CHECK(date <= forme::pdf_date_utc(after));
-}
-
-TEST_CASE("SVG surface and image ids are renumbered by first appearance", "[paint][svg]") {
-  const std::string in =
-      "<defs><g id=\"surface17\"/><image id=\"image40\"/></defs>"
-      "<g id=\"surface9\"><use xlink:href=\"#surface17\"/><rect style=\"fill:url(#image40)\"/></g>"
-      "<g id=\"glyph0-3\"/><g id=\"surface9x\"/><g id=\"clip5\"/>";
-  const std::string want =
-      "<defs><g id=\"surface1\"/><image id=\"image1\"/></defs>"
-      "<g id=\"surface2\"><use xlink:href=\"#surface1\"/><rect style=\"fill:url(#image1)\"/></g>"
-      "<g id=\"glyph0-3\"/><g id=\"surface9x\"/><g id=\"clip5\"/>";
-  CHECK(forme::renumber_svg_ids(in) == want);
-}
-
-TEST_CASE("every SVG id reference still names an element after renumbering", "[paint][svg]") {
-  const std::string svg = paint(demo_page(), forme::OutputFormat::svg, std::nullopt);
-  // Collect ids and check each "#name" reference (href or url()) against them.
-  std::vector<std::string> ids, refs;
-  for (std::size_t p = svg.find("id=\""); p != std::string::npos; p = svg.find("id=\"", p + 1))
-    ids.push_back(svg.substr(p + 4, svg.find('"', p + 4) - p - 4));
-  for (std::size_t p = svg.find("href=\"#"); p != std::string::npos; p = svg.find("href=\"#", p + 1))
-    refs.push_back(svg.substr(p + 7, svg.find('"', p + 7) - p - 7));
-  for (std::size_t p = svg.find("url(#"); p != std::string::npos; p = svg.find("url(#", p + 1))
-    refs.push_back(svg.substr(p + 5, svg.find(')', p + 5) - p - 5));
-  REQUIRE(!refs.empty());
-  CHECK(std::find(ids.begin(), ids.end(), "surface1") != ids.end());
-  for (const auto& r : refs) {
-    INFO(r);
-    CHECK(std::find(ids.begin(), ids.end(), r) != ids.end());
-  }
 }
