@@ -149,3 +149,32 @@ TEST_CASE("a language tag of the wrong shape is a located error and writes nothi
   CHECK(r.err.find("hint: write a BCP 47 tag") != std::string::npos);
   CHECK_FALSE(std::filesystem::exists(dir.file("out.pdf")));
 }
+
+TEST_CASE("a report's language is its PDF's /Lang, and a bad one is located in the report", "[outside][language]") {
+  REQUIRE(have_tool("qpdf"));
+  TempDir dir;
+  const std::string src = std::string(FORME_SOURCE_DIR) + "/layouts/monthly-report";
+  std::filesystem::copy(src, dir.file("report"), std::filesystem::copy_options::recursive);
+  const std::string report = dir.file("report/report.yaml");
+  std::string text = read_file(report);
+  const std::size_t line2 = text.find('\n', text.find('\n') + 1) + 1;  // after the two comment lines
+  text.insert(line2, "language: en-GB\n");
+  write_file(report, text);
+  auto r = run_forme("render " + report + " -o " + dir.file("report.pdf"));
+  INFO(r.err);
+  REQUIRE(r.exit_code == 0);
+  // ISO 32000-1 §14.9.2.1, read by qpdf 11's JSON (version 2).
+  const auto j = run("qpdf --json --json-key=qpdf '" + dir.file("report.pdf") + "' | /usr/bin/python3 -c \"import json, sys; "
+                     "o = json.load(sys.stdin)['qpdf'][1]; "
+                     "print([v['value'].get('/Lang') for v in o.values() if isinstance(v, dict) and "
+                     "isinstance(v.get('value'), dict) and v['value'].get('/Type') == '/Catalog'])\"");
+  REQUIRE(j.exit_code == 0);
+  CHECK(j.out == "['u:en-GB']\n");
+
+  text.replace(text.find("language: en-GB"), 15, "language: en-GB-");
+  write_file(report, text);
+  r = run_forme("render " + report + " -o " + dir.file("bad.pdf"));
+  CHECK(r.exit_code != 0);
+  CHECK(r.err.find(report + ":3:11: error: 'en-GB-' is not a language tag") != std::string::npos);
+  CHECK_FALSE(std::filesystem::exists(dir.file("bad.pdf")));
+}
