@@ -26,6 +26,30 @@ Point nearest_point_of(const Rect& r, Point p) {
 std::optional<CalloutSpot> find_callout_spot(Point target, double w, double h, const CalloutSearch& search,
                                              std::span<const Rect> obstacles, std::span<const Rect> marks,
                                              std::span<const Leader> leaders) {
+  // Marks in a grid of cells about a note's height, so each candidate asks
+  // about its own neighbourhood only.
+  const double reach = search.gap + search.rings * search.step + w + h;
+  const Rect region{target.x - reach, target.y - reach, 2 * reach, 2 * reach};
+  GridIndex index(region, std::max(h, 4.0), std::max(h, 4.0), 1u << 16);
+  index.reserve(marks.size());
+  for (std::size_t i = 0; i < marks.size(); ++i)
+    if (marks[i].overlaps(region)) index.insert(static_cast<int>(i), marks[i]);
+  // Marks the leader passes within `tol` of, away from the target itself
+  // (the dot, bar or line the note points at).
+  const double tol = 0.75;
+  auto leader_marks = [&](Point a, Point b) {
+    const Rect span = Rect{std::min(a.x, b.x), std::min(a.y, b.y), std::abs(b.x - a.x), std::abs(b.y - a.y)}.inflate(tol);
+    int n = 0;
+    index.query(span, [&](int, const Rect& m) {
+      if (m.contains(a) || std::hypot(m.cx() - a.x, m.cy() - a.y) < search.gap) return;
+      if (m.w > 0 && m.h > 0) {
+        n += segment_enters(a, b, m.inflate(tol)) ? 1 : 0;
+      } else {
+        n += distance_to_segment({m.x, m.y}, a, b) < tol ? 1 : 0;
+      }
+    });
+    return n;
+  };
   std::optional<CalloutSpot> best;
   double best_cost = 0;
   constexpr int kDirections = 16;
@@ -47,15 +71,22 @@ std::optional<CalloutSpot> find_callout_spot(Point target, double w, double h, c
         if (blocked) break;
       }
       if (blocked) continue;
-      CalloutSpot spot{box, {target, end}, 0, 0};
-      for (const Rect& mk : marks) spot.marks += mk.overlaps(box) ? 1 : 0;
+      CalloutSpot spot{box, {target, end}, index.count_overlaps(box), 0, 0};
+      if (search.max_marks >= 0 && spot.marks > search.max_marks) continue;
+      spot.leader_marks = leader_marks(target, end);
       for (const Leader& l : leaders)
         spot.crossings += segments_cross(target, end, l.from, l.to) || segment_enters(l.from, l.to, box) ? 1 : 0;
-      const double cost = d + 1000.0 * spot.marks + 10000.0 * spot.crossings;
+      const double cost = d + 1000.0 * spot.marks + 100.0 * spot.leader_marks + 10000.0 * spot.crossings;
       if (!best || cost < best_cost) best = spot, best_cost = cost;
     }
   }
   return best;
+}
+
+double distance_to_segment(Point p, Point a, Point b) {
+  const double dx = b.x - a.x, dy = b.y - a.y, len2 = dx * dx + dy * dy;
+  const double t = len2 > 0 ? std::clamp(((p.x - a.x) * dx + (p.y - a.y) * dy) / len2, 0.0, 1.0) : 0.0;
+  return std::hypot(p.x - (a.x + t * dx), p.y - (a.y + t * dy));
 }
 
 }  // namespace forme

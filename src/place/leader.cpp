@@ -22,6 +22,18 @@ bool segment_blocked(Point a, Point b, const GridIndex& index) {
   return blocked;
 }
 
+// A leader may leave its own point's dot, but no other mark's box.
+bool crosses_other_marks(Point anchor, Point end, const GridIndex& marks) {
+  constexpr double kPad = 1e-6;
+  const Rect span{std::min(anchor.x, end.x) - kPad, std::min(anchor.y, end.y) - kPad,
+                  std::abs(end.x - anchor.x) + 2 * kPad, std::abs(end.y - anchor.y) + 2 * kPad};
+  bool crosses = false;
+  marks.query(span, [&](int, const Rect& r) {
+    crosses = crosses || (r.w > 0 && r.h > 0 && !r.contains(anchor) && segment_enters(anchor, end, r));
+  });
+  return crosses;
+}
+
 }  // namespace
 
 bool segment_enters(Point a, Point b, const Rect& r) {
@@ -58,7 +70,9 @@ std::optional<LeaderSpot> find_leader_spot(Point anchor, double w, double h, con
       const Rect box{cx - w / 2, cy - h / 2, w, h};
       if (!within(box, area) || obstacles.any_overlap(box) || labels.any_overlap(box)) continue;
       const Point end = nearest_point(box, anchor);
-      if (segment_blocked(anchor, end, obstacles) || segment_blocked(anchor, end, labels)) continue;
+      if (segment_blocked(anchor, end, obstacles) || segment_blocked(anchor, end, labels) ||
+          crosses_other_marks(anchor, end, marks))
+        continue;
       const int covered = marks.count_overlaps(box);
       if (!best || covered < best->marks) best = LeaderSpot{box, {anchor, end}, covered};
       if (covered == 0) return best;

@@ -11,7 +11,9 @@
 /// from the anchor to the nearest point of the box.
 ///
 /// A spot is free when the box lies inside the area and overlaps neither an
-/// obstacle nor a placed label, and the leader does not cross into either.
+/// obstacle nor a placed label, and the leader does not cross into either,
+/// nor into any mark with an area (a dot, a bar) other than one holding
+/// the anchor: a leader that runs through another dot points at it.
 /// The first free spot that covers no data mark is returned. If every free
 /// spot covers marks, the first with the fewest marks is returned. Leaders
 /// may cross other leaders; callers that care must check this themselves.

@@ -243,7 +243,9 @@ void place_leaders(const Scene& s, State& st) {
     const LeaderSearch search{o.offset, o.leader_step > 0 ? o.leader_step : l.h, o.leader_rings};
     auto spot = find_leader_spot(l.anchor, l.w, l.h, s.problem.area, s.obstacles, st.placed,
                                  s.marks, search);
-    if (!spot) continue;
+    // The candidates' rule holds out here too: a spot whose marks cost as
+    // much as leaving the label out is no better than leaving it out.
+    if (!spot || spot->marks * o.mark_cost >= o.omit_cost * l.priority) continue;
     st.choice[Scene::idx(i)] = kLeader;
     st.placed.insert(i, spot->box);
     st.leaders[Scene::idx(i)] = spot;

@@ -76,7 +76,9 @@
 /// ## Leader step (both methods)
 /// Each label still left out whose policy is `leader` is tried, by
 /// priority, on rings of positions farther out (see leader.h). If a free
-/// spot is found, a straight leader line joins the box to its point. Labels
+/// spot is found whose marks cost less than leaving the label out (the
+/// rule the candidates follow), a straight leader line joins the box to
+/// its point. Labels
 /// still unplaced after this are listed in `left_out`. In the result, no
 /// two boxes overlap, no box meets an obstacle, and every box lies inside
 /// the area.
