@@ -1,5 +1,6 @@
 #include "layout/guides.h"
 
+#include <algorithm>
 #include <cmath>
 #include <cstdio>
 
@@ -71,31 +72,38 @@ void draw_reference_lines(const MarkContext& ctx, DisplayPage& page, std::vector
     PathItem line;
     line.stroke = dashed;
     line.role = ShapeRole::reference;
+    line.loc = r.loc;
+    ShapedText t;
+    if (!r.label.empty()) t = shape_text(r.label, st.fonts.regular, st.label_size());
+    const double w = t.width, h = t.height();
+    std::vector<Rect> spots;
     if (r.y) {
       const double y = f.py(*r.y);
       line.points = {{f.plot.left(), y}, {f.plot.right(), y}};
-      page.add(std::move(line));
-      if (!r.label.empty()) {
-        ShapedText t = shape_text(r.label, st.fonts.regular, st.label_size());
-        const double gap = st.base * 0.25, w = t.width, h = t.height();
-        const double right = f.plot.right() - gap - w, left = f.plot.left() + gap;
-        labels.push_back({std::move(t),
-                          {{right, y - gap - h, w, h}, {right, y + gap, w, h}, {left, y - gap - h, w, h}, {left, y + gap, w, h}},
-                          st.ink.text, TextRole::value_label, r.loc});
-      }
+      const double gap = st.base * 0.25;
+      const double right = f.plot.right() - gap - w, left = f.plot.left() + gap;
+      spots = {{right, y - gap - h, w, h}, {right, y + gap, w, h}, {left, y - gap - h, w, h}, {left, y + gap, w, h}};
+      // Then along the line, right to left, above and below: a gap between
+      // bars or lines is better than a label on the data.
+      const double step = std::max(st.base, w / 4);
+      for (double x = right - step; x > left; x -= step) spots.push_back({x, y - gap - h, w, h}), spots.push_back({x, y + gap, w, h});
+      // Last, outside the plot beside the line's right end.
+      spots.push_back({f.plot.right() + gap * 2, y - h / 2, w, h});
     } else {
       const double x = f.px(reference_x(r, f.x));
       line.points = {{x, f.plot.top()}, {x, f.plot.bottom()}};
-      page.add(std::move(line));
-      if (!r.label.empty()) {
-        ShapedText t = shape_text(r.label, st.fonts.regular, st.label_size());
-        const double gap = st.base * 0.3, w = t.width, h = t.height();
-        const double top = f.plot.top(), bottom = f.plot.bottom() - h;
-        labels.push_back({std::move(t),
-                          {{x + gap, top, w, h}, {x - gap - w, top, w, h}, {x + gap, bottom, w, h}, {x - gap - w, bottom, w, h}},
-                          st.ink.text, TextRole::value_label, r.loc});
-      }
+      const double gap = st.base * 0.3;
+      const double top = f.plot.top(), bottom = f.plot.bottom() - h;
+      spots = {{x + gap, top, w, h}, {x - gap - w, top, w, h}, {x + gap, bottom, w, h}, {x - gap - w, bottom, w, h}};
+      const double step = std::max(st.base, h);
+      for (double y = top + step; y < bottom; y += step) spots.push_back({x + gap, y, w, h}), spots.push_back({x - gap - w, y, w, h});
+      // Last, above the plot over the line.
+      spots.push_back({x - w / 2, f.plot.top() - gap - h, w, h});
     }
+    // Text placed later keeps off the line too.
+    note_line_marks(line.points, page);
+    page.add(std::move(line));
+    if (!r.label.empty()) labels.push_back({std::move(t), std::move(spots), st.ink.text, TextRole::value_label, r.loc});
   }
 }
 
@@ -116,6 +124,7 @@ void draw_trend_lines(const MarkContext& ctx, DisplayPage& page, std::vector<Spo
     line.role = ShapeRole::reference;
     line.points = {{f.px(x0), f.py(fit->intercept + fit->slope * x0)}, {f.px(x1), f.py(fit->intercept + fit->slope * x1)}};
     line.stroke = Stroke{text_ink(colour, st.ink.paper, 3.0), st.line_width() * 0.8, {}, true};
+    line.loc = spec.loc;
     note_line_marks(line.points, page);  // text placed later keeps off the trend line too
     page.add(std::move(line));
     if (spec.trend == Trend::line_with_equation) {

@@ -3,6 +3,7 @@
 // band. With several series, each is named once, directly beside its bar in
 // the first band, so no legend is needed.
 #include <algorithm>
+#include <cstdint>
 
 #include "colour/text_ink.h"
 #include "layout/marks/marks.h"
@@ -43,6 +44,7 @@ void draw_vertical_bar_marks(const MarkContext& ctx, DisplayPage& page) {
   const double band = x_band(ctx) * kBandFill;
   const double each = band / static_cast<double>(std::max<std::size_t>(1, series.size()));
   const double zero = f.py(0);
+  std::vector<BarValue> values;
   for (std::size_t k = 0; k < series.size(); ++k) {
     const Rgb colour = ctx.colours.at(series[k].name);
     for (std::size_t i = 0; i < series[k].x.size(); ++i) {
@@ -51,11 +53,14 @@ void draw_vertical_bar_marks(const MarkContext& ctx, DisplayPage& page) {
       page.add(box(left, zero, left + each, end, colour, hatch_for(ctx.pattern(series[k].name), colour, st.base)));
       page.data_marks.push_back({left, std::min(zero, end), each, std::abs(end - zero)});
       if (ctx.data.spec->value_labels)
-        add_value_label({{left, std::min(zero, end), each, std::abs(end - zero)}, series[k].y[i], colour, false,
-                         series[k].y[i] >= 0 ? 1 : -1, ctx.pattern(series[k].name) != FillPattern::plain},
-                        f.y.format, st, page);
+        values.push_back({{left, std::min(zero, end), each, std::abs(end - zero)}, series[k].y[i], colour, false,
+                          series[k].y[i] >= 0 ? 1 : -1, ctx.pattern(series[k].name) != FillPattern::plain});
     }
   }
+  // Side by side, neighbouring bars' centres are one bar apart; one bar to a
+  // band, one band apart.
+  const BarValueRoom room{f.plot, series.size() > 1 ? each : x_band(ctx), 0, ctx.data.spec->value_labels_loc};
+  add_value_labels(values, f.y.values, room, st, page, ctx.warnings);
   if (!named(series) || !ctx.label_series) return;
   // Upright bars are too narrow to carry names: name the series in a row
   // of coloured words along the top of the plot, in bar order.
@@ -81,6 +86,8 @@ void draw_horizontal_bar_marks(const MarkContext& ctx, DisplayPage& page) {
   const double zero = f.px(0);
   // Where each series' bar in the first category ends: its name goes there.
   std::vector<double> name_x(series.size(), zero), name_y(series.size(), 0);
+  std::vector<BarValue> values;
+  std::vector<std::size_t> first_value(series.size(), SIZE_MAX);  // the value of each series' first-category bar
   for (std::size_t k = 0; k < series.size(); ++k) {
     const Rgb colour = ctx.colours.at(series[k].name);
     for (std::size_t i = 0; i < series[k].y.size(); ++i) {
@@ -88,21 +95,25 @@ void draw_horizontal_bar_marks(const MarkContext& ctx, DisplayPage& page) {
       const double end = f.px(series[k].x[i]);
       page.add(box(zero, top, end, top + each, colour, hatch_for(ctx.pattern(series[k].name), colour, st.base)));
       page.data_marks.push_back({std::min(zero, end), top, std::abs(end - zero), each});
-      ValuePlacement placed_value = ValuePlacement::inside;
-      if (ctx.data.spec->value_labels)
-        placed_value = add_value_label({{std::min(zero, end), top, std::abs(end - zero), each}, series[k].x[i], colour,
-                                        true, series[k].x[i] >= 0 ? 1 : -1, ctx.pattern(series[k].name) != FillPattern::plain},
-                                       f.x.format, st, page);
       if (series[k].y[i] == 0) {
         name_x[k] = std::max(zero, f.px(series[k].x[i]));
         name_y[k] = top + each / 2;
-        // A value written beyond this bar comes first; the name follows it.
-        if (placed_value == ValuePlacement::outside)
-          name_x[k] += shape_text(format_number(series[k].x[i], f.x.format), st.fonts.regular, st.label_size()).width +
-                       st.base * 0.6;
+        if (ctx.data.spec->value_labels) first_value[k] = values.size();
       }
+      if (ctx.data.spec->value_labels)
+        values.push_back({{std::min(zero, end), top, std::abs(end - zero), each}, series[k].x[i], colour, true,
+                          series[k].x[i] >= 0 ? 1 : -1, ctx.pattern(series[k].name) != FillPattern::plain});
     }
   }
+  // Values beyond long bars may run past the plot's right edge as before:
+  // the page's audit sees any that leave the sheet.
+  const BarValueRoom room{f.plot, series.size() > 1 ? each : f.band_y(), 1e9, ctx.data.spec->value_labels_loc};
+  const std::vector<ValuePlacement> where = add_value_labels(values, f.x.values, room, st, page, ctx.warnings);
+  for (std::size_t k = 0; k < series.size(); ++k)
+    // A value written beyond this bar comes first; the name follows it.
+    if (first_value[k] != SIZE_MAX && where[first_value[k]] == ValuePlacement::outside)
+      name_x[k] += shape_text(format_value(values[first_value[k]].value, f.x.format), st.fonts.regular, st.label_size()).width +
+                   st.base * 0.6;
   if (!named(series) || !ctx.label_series) return;
   std::vector<double> heights(series.size(), PageStyle::line_height(st.fonts.bold, st.label_size()));
   SpreadOptions opt;

@@ -4,6 +4,7 @@
 #include <cmath>
 
 #include "colour/text_ink.h"
+#include "layout/marks/line_values.h"
 #include "layout/marks/marks.h"
 #include "layout/text_items.h"
 #include "place/spread.h"
@@ -38,6 +39,7 @@ void draw_line_marks(const MarkContext& ctx, DisplayPage& page) {
     Point at;
     Rgb colour;
     const std::string* name;
+    std::string value;  ///< written right after the name, when the panel labels last values
   };
   std::vector<End> ends;
   std::vector<std::vector<Point>> drawn;
@@ -64,9 +66,28 @@ void draw_line_marks(const MarkContext& ctx, DisplayPage& page) {
         page.add(std::move(path));
       }
     }
-    if (!s.x.empty() && !s.name.empty()) ends.push_back({{f.px(s.x.back()), f.py(s.y.back())}, colour, &s.name});
+    if (!s.x.empty() && !s.name.empty())
+      ends.push_back({{f.px(s.x.back()), f.py(s.y.back())}, colour, &s.name,
+                      value_joins_name(ctx, s) ? format_number(s.y.back(), line_value_format(ctx)) : std::string()});
   }
   if (!ctx.label_series || ends.empty()) return;
+  // A name, then its value a space after it in the same ink: one label the
+  // eye reads as a pair.
+  ShapeOptions figures;
+  figures.tabular_figures = true;
+  const double space = st.base * 0.4;
+  auto label_width = [&](const End& e, const ShapedText& name) {
+    return e.value.empty() ? name.width
+                           : name.width + space + shape_text(e.value, st.fonts.regular, st.label_size(), figures).width;
+  };
+  auto add_label = [&](const End& e, ShapedText name, double x, double cy) {
+    const Rgb ink = text_ink(e.colour, st.ink.paper);
+    const double after = x + name.width + space;
+    page.add(text_mid(std::move(name), x, cy, Align::left, ink, TextRole::series_label));
+    if (!e.value.empty())
+      page.add(text_mid(shape_text(e.value, st.fonts.regular, st.label_size(), figures), after, cy, Align::left, ink,
+                        TextRole::value_label));
+  };
 
   // A line that stops early (a year still running) is named where it
   // stops, when that spot is clear of every line; the rest are named in
@@ -77,11 +98,11 @@ void draw_line_marks(const MarkContext& ctx, DisplayPage& page) {
   for (const auto& e : ends) {
     if (e.at.x < f.plot.right() - st.base * 0.5) {
       ShapedText t = shape_text(*e.name, st.fonts.regular, st.label_size());
-      const double pad = st.base * 0.5;
+      const double pad = st.base * 0.5, tw = label_width(e, t);
       // Right of the end, then above it, then below it.
-      const Rect candidates[] = {{e.at.x + pad, e.at.y - lh / 2, t.width, lh},
-                                 {e.at.x - t.width / 2, e.at.y - pad - lh, t.width, lh},
-                                 {e.at.x - t.width / 2, e.at.y + pad, t.width, lh}};
+      const Rect candidates[] = {{e.at.x + pad, e.at.y - lh / 2, tw, lh},
+                                 {e.at.x - tw / 2, e.at.y - pad - lh, tw, lh},
+                                 {e.at.x - tw / 2, e.at.y + pad, tw, lh}};
       bool done = false;
       for (const Rect& box : candidates) {
         bool clear = box.left() >= f.plot.left() && box.right() <= f.plot.right() && box.top() >= f.plot.top() &&
@@ -89,7 +110,7 @@ void draw_line_marks(const MarkContext& ctx, DisplayPage& page) {
         for (const Rect& other : placed_early) clear = clear && !other.overlaps(box);
         if (!clear) continue;
         placed_early.push_back(box);
-        page.add(text_mid(std::move(t), box.x, box.cy(), Align::left, text_ink(e.colour, st.ink.paper), TextRole::series_label));
+        add_label(e, std::move(t), box.x, box.cy());
         done = true;
         break;
       }
@@ -122,8 +143,7 @@ void draw_line_marks(const MarkContext& ctx, DisplayPage& page) {
       leader.stroke = Stroke{ends[i].colour, st.rule_width() * 1.5, {}, true};
       page.add(std::move(leader));
     }
-    page.add(text_mid(std::move(texts[i]), label_x, y, Align::left, text_ink(ends[i].colour, st.ink.paper),
-                      TextRole::series_label));
+    add_label(ends[i], std::move(texts[i]), label_x, y);
   }
 }
 

@@ -16,7 +16,17 @@ namespace forme {
 /// extremes, and one point when the highest and lowest coincide.
 std::vector<std::size_t> line_value_points(const std::vector<double>& y, PanelSpec::LineValues rule);
 
-/// Draws the dots and returns the labels to place.
+/// True when the value at `s`'s last point is written right after its
+/// line-end name instead of beside the point: the panel labels last values
+/// and names its series at their ends, so a reader finds name and value
+/// together, and no second label crowds the line's end.
+bool value_joins_name(const MarkContext& ctx, const Series& s);
+
+/// The one number format for every value the panel labels.
+NumberFormat line_value_format(const MarkContext& ctx);
+
+/// Draws the dots and returns the labels to place (none for values that
+/// join their series' names).
 std::vector<PointNameRequest> line_value_labels(const MarkContext& ctx, DisplayPage& page);
 
 }  // namespace forme

@@ -2,6 +2,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <string>
 
 #include "text/shaped_text.h"
 
@@ -12,8 +13,21 @@ double marks_right_inset(ChartKind kind, const std::vector<PanelData>& panels, c
   double widest = 0;
   for (const auto& p : panels)
     if (p.series.size() > 1 || (p.series.size() == 1 && !p.series[0].name.empty()))
-      for (const auto& s : p.series)
-        widest = std::max(widest, shape_text(s.name, style.fonts.regular, style.label_size()).width);
+      for (const auto& s : p.series) {
+        double w = shape_text(s.name, style.fonts.regular, style.label_size()).width;
+        // A line's last value follows its name (line_values.h); the number
+        // format is not known yet, so room is kept for its digits, group
+        // marks and sign, or for three significant digits below one.
+        if (kind == ChartKind::line && p.spec && p.spec->value_labels &&
+            p.spec->line_values == PanelSpec::LineValues::last && !s.y.empty() && std::isfinite(s.y.back())) {
+          const double v = std::abs(s.y.back());
+          const int digits = v >= 1 ? static_cast<int>(std::floor(std::log10(v))) + 1 : 3;
+          const int chars = std::min(16, digits + (digits - 1) / 3 + (v < 1 ? 2 : 0) + (s.y.back() < 0 ? 1 : 0));
+          w += style.base * 0.4 + shape_text(std::string(static_cast<std::size_t>(chars), '0'), style.fonts.regular,
+                                             style.label_size()).width;
+        }
+        widest = std::max(widest, w);
+      }
   // Room for a short leader, then the label.
   return widest > 0 ? widest + style.base * 1.0 : 0;
 }
