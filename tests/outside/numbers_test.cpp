@@ -197,6 +197,38 @@ TEST_CASE("stacked bar values read back as the CSV holds them", "[outside][numbe
   CHECK(values == 6);
 }
 
+TEST_CASE("line values close together keep their digits, and power-of-ten bar values their mantissas",
+          "[outside][numbers]") {
+  REQUIRE(have_tool("pdftotext"));
+  // Invented: two fictional lock gauges; litres passed in three reaches.
+  Rendered r;
+  render(r,
+         "sheet: {size: A4, orientation: landscape, margins: 12mm}\n"
+         "heading: {title: Gauges and litres}\n"
+         "tables: {g: g.csv, m: m.csv}\n"
+         "grid: {columns: 2}\n"
+         "panels:\n"
+         "  - {kind: line, table: g, x: month, y: height, series-by: lock, y-unit: m, x-unit: month,"
+         " value-labels: extremes}\n"
+         "  - {kind: horizontal-bar, table: m, x: litres, y: reach, x-unit: litres, x-format: power-of-ten,"
+         " value-labels: true}\n"
+         "source: \"Source: invented for this test\"\n",
+         {{"g.csv", "month,lock,height\n1,Upper,61.0\n2,Upper,61.66\n3,Upper,61.21\n"
+                    "1,Tail,1.48\n2,Tail,0.67\n3,Tail,0.9\n"},
+          {"m.csv", "reach,litres\nSummit pound,3.4e9\nLong level,1.25e9\nBasin,0.78e9\n"}});
+  const std::set<std::string> words(r.words.begin(), r.words.end());
+  // The extremes of each lock, each as the CSV holds it (61.0 is 61).
+  for (const char* v : {"61", "61.66", "1.48", "0.67"}) {
+    INFO(v);
+    CHECK(words.count(v) == 1);
+  }
+  // Each bar value against its own power, mantissa in [1, 10).
+  for (const char* v : {"3.4×10⁹", "1.25×10⁹", "7.8×10⁸"}) {
+    INFO(v);
+    CHECK(words.count(v) == 1);
+  }
+}
+
 TEST_CASE("the bundled faces' minus sign is a figure wide (fontTools)", "[outside][numbers][fonts]") {
   // fontTools (Debian's python3-fonttools) reads the cmap and hmtx tables.
   TempDir dir;
