@@ -190,7 +190,7 @@ std::string what_it_is(const Piece& p) {
     case ShapeRole::data: return p.kind == Piece::circle ? "a data dot" : p.kind == Piece::stroke ? "a data line"
                                                           : p.kind == Piece::area ? "a patterned fill" : "the edge of a bar or area";
     case ShapeRole::reference: return "a reference or trend line";
-    case ShapeRole::leader: return "a leader line";
+    case ShapeRole::leader: return p.kind == Piece::circle ? "a callout's target dot" : "a leader line";
     case ShapeRole::furniture: return "a rule";
     default: return "a shape";
   }
@@ -218,7 +218,8 @@ PageShapes collect_shapes(const DisplayPage& page, Rgb paper) {
   for (const auto& item : page.items) {
     ++shape;
     if (const auto* c = std::get_if<CircleItem>(&item)) {
-      if (c->role != ShapeRole::data || !finite(c->centre)) continue;
+      // Data dots, and the dot a callout's leader marks its target with.
+      if ((c->role != ShapeRole::data && c->role != ShapeRole::leader) || !finite(c->centre)) continue;
       const bool fill = c->fill && seen(*c->fill), edge = c->stroke && seen(c->stroke->colour);
       if (!fill && !edge) continue;
       const double r = c->radius + (edge ? c->stroke->width / 2 : 0);  // a paper rim adds no ink

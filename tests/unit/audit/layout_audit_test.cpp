@@ -165,3 +165,14 @@ TEST_CASE("many findings of one kind print as one warning, located at the first"
   REQUIRE(sink.items().size() == 1);
   CHECK(sink.items().front().message.rfind("10 texts reach or run past the edge", 0) == 0);
 }
+
+TEST_CASE("a callout's target dot inside a text's ink is found", "[audit][layout]") {
+  DisplayPage p = a5();
+  TextItem t = text("Busiest week", 100, 100);
+  const double mid = 100 + t.text.width / 2;
+  p.add(std::move(t));
+  p.add(CircleItem{{mid, 100 - 3}, 1.1, Rgb{0.1, 0.1, 0.1}, std::nullopt, ShapeRole::leader, {}});
+  const auto f = find_layout_faults(p);
+  REQUIRE(count(f, LayoutFault::crossed_by_line) == 1);
+  CHECK(f.front().detail == "a callout's target dot");
+}
