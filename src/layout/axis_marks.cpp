@@ -37,23 +37,32 @@ double widest(const std::vector<ShapedText>& labels) {
   return w;
 }
 
-int label_stride(const Axis& axis, const std::vector<ShapedText>& labels, double length, double gap) {
-  if (axis.ticks.size() < 2 || axis.kind == AxisKind::category) return 1;
-  const double spacing = length * (axis.ticks[1].value - axis.ticks[0].value) / (axis.hi - axis.lo);
-  if (spacing <= 0) return 1;
-  return std::max(1, static_cast<int>(std::ceil((widest(labels) + gap) / spacing)));
+double label_gap(const PageStyle& st) { return st.label_size() * 0.5; }
+
+int label_stride(const Axis& axis, double extent, double length, double gap) {
+  const std::size_t n = axis.ticks.size();
+  if (n < 2 || length <= 0) return 1;
+  std::vector<double> at;
+  for (const auto& t : axis.ticks) at.push_back(PlotFrame::frac(axis, t.value) * length);
+  const double need = extent + gap;
+  for (std::size_t k = 1; k < n; ++k) {
+    bool clear = true;
+    for (std::size_t i = 0; i + k < n && clear; i += k) clear = std::abs(at[i + k] - at[i]) >= need - 1e-9;
+    if (clear) return static_cast<int>(k);
+  }
+  return static_cast<int>(n);  // room for the first label only
 }
 
-double x_label_band(const Axis& x, const PageStyle& st, double category_width) {
-  const double line = PageStyle::line_height(st.fonts.regular, st.label_size());
+double x_label_band(const Axis& x, const PageStyle& st, const NameFit* names) {
   double lines = 1;
+  double line = PageStyle::line_height(st.fonts.regular, st.label_size());
   if (x.kind == AxisKind::date)
     for (const auto& t : x.ticks)
       if (t.major) lines = 2;
-  if (x.kind == AxisKind::category)
-    for (const auto& t : x.ticks)
-      lines = std::max(lines, static_cast<double>(
-                                  wrap_text(t.label, st.fonts.regular, st.label_size(), category_width).size()));
+  if (x.kind == AxisKind::category && names) {
+    lines = std::max(1, names->most_lines);
+    line = names->line_height;
+  }
   return st.tick_length() + st.base * 0.3 + line * lines;
 }
 
@@ -88,9 +97,12 @@ void draw_axis_labels(const PlotFrame& f, const PageStyle& st, const AxisLabelli
   // x axis: ticks below the plot for dates and numbers; labels under them.
   if (which.x_labels) {
     auto labels = shape_tick_labels(f.x, st);
-    const int stride = label_stride(f.x, labels, f.plot.w, st.base * 0.8);
-    const double lead = PageStyle::line_height(st.fonts.regular, st.label_size());
-    const double baseline = f.plot.bottom() + tl + pad + st.fonts.regular->ascent_em() * st.label_size();
+    const NameFit* names = f.x.kind == AxisKind::category ? which.x_names : nullptr;
+    // Category names were fitted to their slots (and thinned) already.
+    const int stride = names ? names->stride : label_stride(f.x, widest(labels), f.plot.w, st.base * 0.8);
+    const double lead = names ? names->line_height : PageStyle::line_height(st.fonts.regular, st.label_size());
+    const double baseline =
+        f.plot.bottom() + tl + pad + st.fonts.regular->ascent_em() * (names ? names->size : st.label_size());
     for (std::size_t i = 0; i < f.x.ticks.size(); ++i) {
       const Tick& t = f.x.ticks[i];
       const double x = f.px(t.value);
@@ -99,7 +111,10 @@ void draw_axis_labels(const PlotFrame& f, const PageStyle& st, const AxisLabelli
       if (i % static_cast<std::size_t>(stride) != 0) continue;
       if (f.x.kind == AxisKind::category) {
         double y = baseline;
-        for (auto& line : wrap_text(t.label, st.fonts.regular, st.label_size(), f.band_x() * 0.95)) {
+        const auto lines = names && i < names->names.size()
+                               ? names->names[i].lines
+                               : wrap_text(t.label, st.fonts.regular, st.label_size(), f.band_x() * 0.95);
+        for (auto line : lines) {
           page.add(text_at(line, x, y, Align::centre, st.ink.muted, TextRole::tick_label));
           y += lead;
         }
@@ -115,11 +130,26 @@ void draw_axis_labels(const PlotFrame& f, const PageStyle& st, const AxisLabelli
       }
     }
   }
-  if (which.y_labels) {
+  if (which.y_labels && f.y.kind == AxisKind::category && which.y_names) {
+    // Names in their column, each block of lines centred on its band.
+    const NameFit& names = *which.y_names;
+    for (std::size_t i = 0; i < f.y.ticks.size() && i < names.names.size(); ++i) {
+      const auto& lines = names.names[i].lines;
+      double cy = f.py(f.y.ticks[i].value) - names.line_height * static_cast<double>(lines.size() - 1) / 2;
+      for (const auto& line : lines) {
+        page.add(text_mid(line, f.plot.left() - pad, cy, Align::right, st.ink.text, TextRole::tick_label));
+        cy += names.line_height;
+      }
+    }
+  } else if (which.y_labels) {
     auto labels = shape_tick_labels(f.y, st);
-    for (std::size_t i = 0; i < f.y.ticks.size(); ++i)
+    const double tall = labels.empty() ? 0 : labels.front().height();
+    const int stride = f.y.kind == AxisKind::category ? 1 : label_stride(f.y, tall, f.plot.h, label_gap(st));
+    for (std::size_t i = 0; i < f.y.ticks.size(); ++i) {
+      if (i % static_cast<std::size_t>(stride) != 0) continue;
       page.add(text_mid(labels[i], f.plot.left() - pad, f.py(f.y.ticks[i].value), Align::right,
                         f.y.kind == AxisKind::category ? st.ink.text : st.ink.muted, TextRole::tick_label));
+    }
   }
 }
 

@@ -1,9 +1,40 @@
 #include "layout/furniture.h"
 
+#include <algorithm>
+#include <cmath>
+
 #include "layout/text_items.h"
 #include "text/wrap.h"
 
 namespace forme {
+
+namespace {
+
+// A long word in a message: its start, enough to recognise it.
+std::string word_start(const std::string& w) {
+  if (w.size() <= 24) return w;
+  std::size_t cut = 24;
+  while (cut > 0 && (static_cast<unsigned char>(w[cut]) & 0xC0) == 0x80) --cut;
+  return w.substr(0, cut) + "\u2026";
+}
+
+std::string points(double v) { return std::to_string(static_cast<int>(std::lround(v))); }
+
+}  // namespace
+
+std::vector<ShapedText> wrap_within(const std::string& text, const FontRef& font, double size, double min_size,
+                                    double width, const std::string& what, const SourceLoc& loc) {
+  min_size = std::min(min_size, size);
+  for (double s = size;; s = std::max(min_size, s - 0.5)) {
+    const WidestWord w = widest_word(text, font, s);
+    if (w.width <= width + 1e-9) return wrap_text(text, font, s, width);
+    if (s <= min_size)
+      throw InputError(loc,
+                       what + "'s word '" + word_start(w.text) + "' is " + points(w.width) + " pt wide even at " +
+                           points(s) + " pt type, wider than the " + points(width) + " pt it has",
+                       "break the word with a space or hyphen, or use a wider sheet or a smaller type size");
+  }
+}
 
 double set_heading(const PageSpec& spec, const std::string& standfirst, const PageStyle& st, const Rect& content,
                    DisplayPage& page) {
@@ -12,7 +43,7 @@ double set_heading(const PageSpec& spec, const std::string& standfirst, const Pa
   if (!spec.title.empty()) {
     const double size = st.title_size();
     const double lead = PageStyle::line_height(st.fonts.bold, size);
-    for (auto& line : wrap_text(spec.title, st.fonts.bold, size, content.w)) {
+    for (auto& line : wrap_within(spec.title, st.fonts.bold, size, st.min_size(), content.w, "the title", spec.heading_loc)) {
       page.add(text_at(line, content.x, y + line.ascent, Align::left, st.ink.text, TextRole::title));
       y += lead;
     }
@@ -24,7 +55,8 @@ double set_heading(const PageSpec& spec, const std::string& standfirst, const Pa
     // A measure of about 80 characters reads comfortably (common practice).
     const double measure = std::min(content.w, size * 0.5 * 80);
     const double lead = PageStyle::line_height(st.fonts.regular, size);
-    for (auto& line : wrap_text(standfirst, st.fonts.regular, size, measure)) {
+    for (auto& line : wrap_within(standfirst, st.fonts.regular, size, st.min_size(), measure, "the standfirst",
+                                  spec.heading_loc)) {
       page.add(text_at(line, content.x, y + line.ascent, Align::left, st.ink.muted, TextRole::standfirst));
       y += lead;
     }
@@ -39,7 +71,9 @@ double set_footer(const PageSpec& spec, const PageStyle& st, const Rect& content
   const double size = st.note_size();
   std::vector<std::pair<ShapedText, TextRole>> lines;
   auto add = [&](const std::string& text, TextRole role, const FontRef& font) {
-    for (auto& l : wrap_text(text, font, size, content.w)) lines.emplace_back(std::move(l), role);
+    const std::string what = role == TextRole::source ? "the source line" : "a note";
+    for (auto& l : wrap_within(text, font, size, st.min_size(), content.w, what, spec.footer_loc))
+      lines.emplace_back(std::move(l), role);
   };
   for (const auto& n : spec.notes) add(n, TextRole::note, st.fonts.regular);
   for (const auto& n : extra_notes) add(n, TextRole::note, st.fonts.regular);

@@ -8,6 +8,13 @@
 
 namespace forme {
 
+/// Lines of `text` within `width`, wrapped at UAX #14 break opportunities.
+/// When one word is wider than `width` at `size`, the whole text is set
+/// smaller, in 0.5 pt steps down to `min_size`; a word too wide even then
+/// is an error at `loc`, naming `what` ("the title") and both widths.
+std::vector<ShapedText> wrap_within(const std::string& text, const FontRef& font, double size, double min_size,
+                                    double width, const std::string& what, const SourceLoc& loc);
+
 /// Sets the heading from the top of `content`; returns the height used
 /// (including the space after it).
 /// `standfirst` is the author's, extended with what forme did to the values.

@@ -1,6 +1,7 @@
 #pragma once
 /// Stage 2b: the rows each panel shows, grouped into series. Positions are
 /// still in data units; categories are indices into `categories`.
+#include <map>
 #include <string>
 #include <vector>
 
@@ -44,6 +45,8 @@ struct PanelData {
   DatePrecision x_dates = DatePrecision::day;  ///< when x_kind is date
   /// Category names in order of first appearance, for the category axis.
   std::vector<std::string> categories;
+  /// The first table row of each category name, for messages about it.
+  std::map<std::string, SourceLoc, std::less<>> category_rows;
   std::vector<Series> series;
   std::size_t rows_used = 0;
   /// The table the panel reads, and the indices of the rows it plotted (in

@@ -195,6 +195,11 @@ PanelData build_panel(const PanelSpec& p, const Table& t, const std::vector<std:
     ++d.rows_used;
     d.rows.push_back(r);
   }
+  // Where each category name first appears, so a message about the name
+  // (shortened to fit, say) can point at its row.
+  if (const Column* cat_col = d.y_kind == AxisKind::category ? &yc : d.x_kind == AxisKind::category ? &xc : nullptr)
+    for (std::size_t r : d.rows)
+      d.category_rows.try_emplace(cat_col->text[r], SourceLoc{t.path, r < t.row_lines.size() ? t.row_lines[r] : 0, 1});
   // Lines are drawn in x order whatever order the file had (for text
   // categories, their order of first appearance: an ordinal scale).
   if (p.kind == ChartKind::line || p.kind == ChartKind::stacked_area)

@@ -56,4 +56,60 @@ std::vector<ShapedText> wrap_text(const std::string& utf8, const FontRef& font, 
   return lines;
 }
 
+namespace {
+
+// Byte offsets just after each break opportunity (and the end of the text).
+std::vector<std::size_t> break_ends(const std::string& utf8) {
+  init_unibreak_once();
+  std::vector<std::size_t> ends;
+  if (utf8.empty()) return ends;
+  std::vector<char> brks(utf8.size());
+  set_linebreaks_utf8(reinterpret_cast<const utf8_t*>(utf8.data()), utf8.size(), "en", brks.data());
+  for (std::size_t i = 0; i < utf8.size(); ++i)
+    if (brks[i] == LINEBREAK_MUSTBREAK || brks[i] == LINEBREAK_ALLOWBREAK || i + 1 == utf8.size())
+      ends.push_back(i + 1);
+  if (ends.back() != utf8.size()) ends.push_back(utf8.size());
+  return ends;
+}
+
+bool continuation_byte(char c) { return (static_cast<unsigned char>(c) & 0xC0) == 0x80; }
+
+}  // namespace
+
+WidestWord widest_word(const std::string& utf8, const FontRef& font, double size, const ShapeOptions& options) {
+  WidestWord out;
+  std::size_t start = 0;
+  for (std::size_t end : break_ends(utf8)) {
+    std::string word = trim_trailing_space(utf8.substr(start, end - start));
+    start = end;
+    if (word.empty()) continue;
+    const double w = shape_text(word, font, size, options).width;
+    if (w > out.width) out = {std::move(word), w};
+  }
+  return out;
+}
+
+ShapedText shorten_text(const std::string& utf8, const FontRef& font, double size, double width,
+                        const ShapeOptions& options) {
+  ShapedText whole = shape_text(utf8, font, size, options);
+  if (whole.width <= width) return whole;
+  static const std::string ellipsis = "\u2026";  // HORIZONTAL ELLIPSIS
+  // Longest start ending at a break opportunity (the last one is the end).
+  const std::vector<std::size_t> ends = break_ends(utf8);
+  for (std::size_t k = ends.size(); k-- > 1;) {
+    std::string head = trim_trailing_space(utf8.substr(0, ends[k - 1]));
+    if (head.empty()) continue;
+    ShapedText t = shape_text(head + ellipsis, font, size, options);
+    if (t.width <= width) return t;
+  }
+  // Not even the first word fits: cut it between characters (never inside
+  // one's UTF-8 bytes).
+  for (std::size_t cut = utf8.size(); cut > 0; --cut) {
+    if (cut < utf8.size() && continuation_byte(utf8[cut])) continue;
+    ShapedText t = shape_text(trim_trailing_space(utf8.substr(0, cut)) + ellipsis, font, size, options);
+    if (t.width <= width) return t;
+  }
+  return shape_text(ellipsis, font, size, options);
+}
+
 }  // namespace forme

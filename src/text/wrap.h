@@ -16,4 +16,20 @@ namespace forme {
 std::vector<ShapedText> wrap_text(const std::string& utf8, const FontRef& font, double size, double width,
                                   const ShapeOptions& options = {});
 
+/// The widest run of `utf8` that UAX #14 allows no break inside (a word
+/// with its trailing punctuation), and its width at `size`: what no line
+/// narrower than that can hold.
+struct WidestWord {
+  std::string text;
+  double width = 0;
+};
+WidestWord widest_word(const std::string& utf8, const FontRef& font, double size, const ShapeOptions& options = {});
+
+/// `utf8` shortened to fit `width`: the longest start ending at a break
+/// opportunity, followed by "…" (U+2026); when not even the first word
+/// fits, the longest start of whole characters with "…". Returns the text
+/// unchanged when it already fits.
+ShapedText shorten_text(const std::string& utf8, const FontRef& font, double size, double width,
+                        const ShapeOptions& options = {});
+
 }  // namespace forme
