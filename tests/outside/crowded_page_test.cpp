@@ -64,7 +64,9 @@ TEST_CASE("crowded page: pdftotext finds no two overlapping text boxes", "[outsi
   // are the text boxes themselves, are compared here.
   const auto words = pdf_layout_words(pdf);
   REQUIRE(words.size() == 1);
-  REQUIRE(words.front().words.size() > 300);
+  // Title, ticks, twenty line-end names, the callout and the point names
+  // that find room clear of every dot (regression value, not a standard).
+  REQUIRE(words.front().words.size() > 200);
   require_no_overlaps(words);
   // The callout and the line-end names reached the page.
   std::string all;
@@ -110,7 +112,10 @@ TEST_CASE("crowded page: every point name is drawn or reported at its table row"
   }
   for (const auto& name : drawn) CHECK(reported.count(name) == 0);
   CHECK(drawn.size() + reported.size() == wells.size());
-  CHECK(drawn.size() >= 100);  // a third of the names or more find room (regression value, not a standard)
+  // Names may cover no dot, line or rule, so on this panel about one in five
+  // finds room (56 when this was written); the floor is a regression value,
+  // not a standard.
+  CHECK(drawn.size() >= 50);
   CHECK(!reported.empty());    // the page is crowded on purpose: some must be left out
 
   // pdftotext reads every drawn name back from the PDF (a line may hold

@@ -35,7 +35,7 @@ TEST_CASE("a callout whose nearer spots cover a bar goes beside it instead", "[p
   }
 }
 
-TEST_CASE("with no clear room, max_marks 0 refuses every spot; without it the fewest marks win", "[place][callout]") {
+TEST_CASE("with no clear room, max_marks 0 refuses every spot, without it the fewest marks win", "[place][callout]") {
   // The bar covers the whole area, so every spot covers exactly it.
   const std::vector<Rect> marks{{-1, -1, 302, 302}};
   CHECK_FALSE(find_callout_spot({100, 100}, 20, 10, CalloutSearch{{0, 0, 300, 300}, 4, 8, 10, 0}, {}, marks, {}));
