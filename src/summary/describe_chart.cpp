@@ -119,6 +119,7 @@ std::string describe_chart(const PageSpec& page, std::span<const PanelData> pane
     }
     if (lo <= hi) out += ", " + value_name(i) + " from " + number(lo) + " to " + number(hi);
     out += ".";
+    if (!p.gap_note.empty()) out += " " + p.gap_note;  // the gaps, as the page says them
   }
   return out;
 }

@@ -71,7 +71,10 @@ TEST_CASE("crowded page: pdftotext finds no two overlapping text boxes", "[outsi
   // The callout and the line-end names reached the page.
   std::string all;
   for (const auto& w : words.front().words) all += w.text + " ";
-  CHECK(all.find("deepest well of the survey") != std::string::npos);
+  // The callout wraps onto two lines; a point name may sit between them in
+  // the content order, so each line is looked for on its own.
+  CHECK(all.find("deepest well of the") != std::string::npos);
+  CHECK(all.find("was bored in the spring") != std::string::npos);
   CHECK(all.find("Fentor Mill") != std::string::npos);
 }
 

@@ -38,7 +38,7 @@ TEST_CASE("a missing cell and a missing year break a yearly line, and the note l
   CHECK(note == "No data for Route 7 in 2016 and 2020.");
 }
 
-TEST_CASE("three missing periods in a row are written as a range; more than five are counted", "[series][gaps]") {
+TEST_CASE("three missing periods in a row are written as a range, more than five are counted", "[series][gaps]") {
   PanelData p = yearly({{"North", {year(2010), year(2011), year(2015), year(2016)}, {1, 2, 3, 4}}});
   CHECK(mark_gaps(p, {}, "") == "No data for North in 2012–2014.");
   CHECK(p.series[0].breaks == std::vector<std::size_t>{2});
@@ -72,7 +72,7 @@ TEST_CASE("a series of working days has no gap at weekends, but a missing weekda
   CHECK(mark_gaps(q, {}, "") == "No data for Calls in 4 March 2024.");
 }
 
-TEST_CASE("irregular dates and number axes have no period gaps; bars are listed but not broken", "[series][gaps]") {
+TEST_CASE("irregular dates and number axes have no period gaps, bars are listed but not broken", "[series][gaps]") {
   // Three points over eight years cover less than half the periods: not a regular series.
   PanelData p = yearly({{"Survey", {year(2010), year(2014), year(2017)}, {1, 2, 3}}});
   CHECK(mark_gaps(p, {}, "").empty());
