@@ -23,18 +23,12 @@ namespace {
 
 const std::string kPage = std::string(FORME_TEST_DIR) + "/pages/crowded/page.yaml";
 
-bool overlap(const PdfWord& a, const PdfWord& b) {
-  // Boxes that share only an edge do not overlap; allow 0.01 pt of rounding.
-  const double eps = 0.01;
-  return a.x_min < b.x_max - eps && b.x_min < a.x_max - eps && a.y_min < b.y_max - eps && b.y_min < a.y_max - eps;
-}
-
 void require_no_overlaps(const std::vector<PdfPageWords>& pages) {
   for (const auto& p : pages)
     for (std::size_t i = 0; i < p.words.size(); ++i)
       for (std::size_t j = i + 1; j < p.words.size(); ++j) {
         INFO("'" << p.words[i].text << "' overlaps '" << p.words[j].text << "'");
-        CHECK_FALSE(overlap(p.words[i], p.words[j]));
+        CHECK_FALSE(words_overlap(p.words[i], p.words[j], 0.01));
       }
 }
 

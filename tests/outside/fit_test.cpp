@@ -21,13 +21,6 @@ namespace {
 const std::string kStress = std::string(FORME_SOURCE_DIR) + "/tests/pages/stress/";
 const std::vector<std::string> kPages = {"fit-hbar-a5", "fit-upright-a6", "fit-journal-names", "fit-poster-names"};
 
-bool overlap(const PdfWord& a, const PdfWord& b) {
-  // Boxes that only touch (shared edge, as stacked lines do) do not overlap.
-  const double w = std::min(a.x_max, b.x_max) - std::max(a.x_min, b.x_min);
-  const double h = std::min(a.y_max, b.y_max) - std::max(a.y_min, b.y_min);
-  return w > 0.05 && h > 0.05;
-}
-
 }  // namespace
 
 TEST_CASE("every word of the fit stress pages lies inside the trim box and no two words overlap", "[outside][fit]") {
@@ -57,7 +50,7 @@ TEST_CASE("every word of the fit stress pages lies inside the trim box and no tw
     for (std::size_t i = 0; i < ws.size(); ++i)
       for (std::size_t j = i + 1; j < ws.size(); ++j) {
         INFO("'" << ws[i].text << "' and '" << ws[j].text << "'");
-        CHECK_FALSE(overlap(ws[i], ws[j]));
+        CHECK_FALSE(words_overlap(ws[i], ws[j]));
       }
   }
 }

@@ -25,12 +25,6 @@ namespace {
 const std::string kStress = std::string(FORME_SOURCE_DIR) + "/tests/pages/stress/";
 const std::vector<std::string> kPages = {"place-line-ends", "place-bar-values", "place-narrow-bars", "place-scatter"};
 
-bool overlap(const PdfWord& a, const PdfWord& b) {
-  const double w = std::min(a.x_max, b.x_max) - std::max(a.x_min, b.x_min);
-  const double h = std::min(a.y_max, b.y_max) - std::max(a.y_min, b.y_min);
-  return w > 0.05 && h > 0.05;
-}
-
 // The last field of each data row of a CSV, as a number.
 std::vector<double> last_column(const std::string& path) {
   std::ifstream in(path);
@@ -85,7 +79,7 @@ TEST_CASE("placement stress pages: no two words overlap and the outside audit fi
     for (std::size_t i = 0; i < ws.size(); ++i)
       for (std::size_t j = i + 1; j < ws.size(); ++j) {
         INFO("'" << ws[i].text << "' and '" << ws[j].text << "'");
-        CHECK_FALSE(overlap(ws[i], ws[j]));
+        CHECK_FALSE(words_overlap(ws[i], ws[j]));
       }
     auto a = run("/usr/bin/python3 '" + std::string(FORME_SOURCE_DIR) + "/../shared/tools/page_audit.py' " + pdf);
     INFO(a.out << a.err);

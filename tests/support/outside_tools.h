@@ -1,6 +1,7 @@
 #pragma once
 /// Helpers for tests that ask independent tools (poppler, qpdf, fontTools)
 /// about files forme wrote.
+#include <algorithm>
 #include <map>
 #include <string>
 #include <vector>
@@ -44,6 +45,14 @@ struct PdfWord {
   std::string text;
   double x_min = 0, y_min = 0, x_max = 0, y_max = 0;
 };
+
+/// Whether two word boxes overlap by more than `slack` points each way:
+/// boxes that only share an edge, as stacked lines do, do not.
+inline bool words_overlap(const PdfWord& a, const PdfWord& b, double slack = 0.05) {
+  const double w = std::min(a.x_max, b.x_max) - std::max(a.x_min, b.x_min);
+  const double h = std::min(a.y_max, b.y_max) - std::max(a.y_min, b.y_min);
+  return w > slack && h > slack;
+}
 
 struct PdfPageWords {
   double width = 0, height = 0;
