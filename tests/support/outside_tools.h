@@ -54,6 +54,17 @@ inline bool words_overlap(const PdfWord& a, const PdfWord& b, double slack = 0.0
   return w > slack && h > slack;
 }
 
+/// Every pair of `words` that overlap (as `words_overlap`), written
+/// "'a' overlaps 'b'", so a test can check the list is empty and print it.
+inline std::vector<std::string> overlapping_words(const std::vector<PdfWord>& words, double slack = 0.05) {
+  std::vector<std::string> out;
+  for (std::size_t i = 0; i < words.size(); ++i)
+    for (std::size_t j = i + 1; j < words.size(); ++j)
+      if (words_overlap(words[i], words[j], slack))
+        out.push_back("'" + words[i].text + "' overlaps '" + words[j].text + "'");
+  return out;
+}
+
 struct PdfPageWords {
   double width = 0, height = 0;
   std::vector<PdfWord> words;
