@@ -219,9 +219,8 @@ void audit_text(const PageSpec& spec, const DisplayPage& page, const std::vector
 
 }  // namespace
 
-void audit_colours(const PageSpec& spec, const std::vector<PanelData>& panels, const DisplayPage& page,
-                   bool greyscale, DiagnosticSink& out) {
-  const std::vector<PanelLooks> looks = assign_looks(spec, panels);
+void audit_colours(const PageSpec& spec, const std::vector<PanelData>& panels, const std::vector<PanelLooks>& looks,
+                   const DisplayPage& page, bool greyscale, DiagnosticSink& out) {
   audit_unused_looks(spec, panels, out);
   // The paper: white, or the colour the press sheet prints under the page.
   Rgb paper = spec.sheet.press.background.value_or(Rgb{1, 1, 1});

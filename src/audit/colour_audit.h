@@ -23,6 +23,7 @@
 
 #include "base/diagnostic.h"
 #include "describe/page_spec.h"
+#include "layout/series_looks.h"
 #include "paint/display_list.h"
 #include "series/panel_data.h"
 
@@ -36,8 +37,8 @@ inline constexpr double kSeriesDeltaE = 10;
 
 /// Checks series colours (per panel, per simulated vision) and text
 /// contrast on the laid-out page `page` (painted in grey when
-/// `greyscale`).
-void audit_colours(const PageSpec& spec, const std::vector<PanelData>& panels, const DisplayPage& page,
-                   bool greyscale, DiagnosticSink& findings);
+/// `greyscale`), with the series looks the page was drawn with.
+void audit_colours(const PageSpec& spec, const std::vector<PanelData>& panels, const std::vector<PanelLooks>& looks,
+                   const DisplayPage& page, bool greyscale, DiagnosticSink& findings);
 
 }  // namespace forme

@@ -166,7 +166,7 @@ ComposedDocument compose_spec(PageSpec spec, const std::vector<Table>& tables, c
   audit_missing_glyphs(spec, doc.pages.front(), sink);
   greyscale = greyscale || spec.greyscale;  // for black-and-white printing
   if (greyscale) doc.pages.front() = in_greyscale(std::move(doc.pages.front()));
-  audit_colours(spec, panels, doc.pages.front(), greyscale, sink);
+  audit_colours(spec, panels, laid.looks, doc.pages.front(), greyscale, sink);
   lap(&StageTimes::layout);
   for (const auto& d : sink.items())
     if (d.severity == Severity::error) throw InputError(d);  // reported already; stops the write
@@ -188,9 +188,8 @@ ComposedDocument compose_spec(PageSpec spec, const std::vector<Table>& tables, c
                          std::to_string(limits.pages) + " one document may hold",
                      "filter the rows set in the table pages, or raise the limit with '--limit pages=N'");
   // The palette place each series took, which a report keeps on later pages.
-  const std::vector<PanelLooks> looks = assign_looks(spec, panels);
-  for (std::size_t i = 0; i < looks.size() && i < panels.size(); ++i)
-    for (const auto& [name, look] : looks[i].series)
+  for (std::size_t i = 0; i < laid.looks.size() && i < panels.size(); ++i)
+    for (const auto& [name, look] : laid.looks[i].series)
       if (look.place) doc.series_places.emplace(series_identity(name, *panels[i].spec), *look.place);
   doc.info = document_info(spec, plotted);
   doc.info.description = describe_chart(spec, panels, axes);

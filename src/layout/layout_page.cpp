@@ -285,7 +285,7 @@ LaidOutPage lay_out_boxes(const PageSpec& spec, const std::vector<PanelData>& pa
   if (plot_w < st.base * 4 || plot_h < st.base * 4)
     explain_no_fit(spec, st, NoFit{g, plot_w, plot_h, content, head, foot, sum_left, m.right, m.top, sum_bottom, gap});
 
-  const std::vector<PanelLooks> looks = assign_looks(spec, panels);
+  std::vector<PanelLooks> looks = assign_looks(spec, panels);
   const bool name_series = [&] {
     for (const auto& p : panels)
       if (p.series.size() > 1) return true;
@@ -358,7 +358,7 @@ LaidOutPage lay_out_boxes(const PageSpec& spec, const std::vector<PanelData>& pa
     }
     page.figures.back().end = page.items.size();
   }
-  return {std::move(page), std::move(movables)};
+  return {std::move(page), std::move(movables), std::move(looks)};
 }
 
 DisplayPage layout_page(const PageSpec& spec, const std::vector<PanelData>& panels,

@@ -9,6 +9,7 @@
 #include "describe/page_spec.h"
 #include "layout/movable_text.h"
 #include "layout/page_style.h"
+#include "layout/series_looks.h"
 #include "paint/display_list.h"
 #include "series/panel_data.h"
 
@@ -20,6 +21,7 @@ namespace forme {
 struct LaidOutPage {
   DisplayPage page;
   std::vector<PanelMovables> movables;
+  std::vector<PanelLooks> looks;  ///< each panel's series looks, as the marks were drawn
 };
 LaidOutPage lay_out_boxes(const PageSpec& spec, const std::vector<PanelData>& panels,
                           const std::vector<PanelAxes>& axes, const PageStyle& style, DiagnosticSink& warnings);

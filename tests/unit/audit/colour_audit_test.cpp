@@ -23,7 +23,7 @@ std::vector<Diagnostic> audit(const DisplayPage& page) {
   PageSpec spec;
   spec.loc = {"page.yaml", 1, 1};
   DiagnosticSink sink;
-  audit_colours(spec, {}, page, false, sink);
+  audit_colours(spec, {}, {}, page, false, sink);
   return sink.items();
 }
 
