@@ -125,7 +125,7 @@ GridMeasure measure_grid(const std::vector<PanelData>& panels, const std::vector
   m.x_title = any_xtitle ? line + st.base * 0.3 : 0;
   // Every panel gets the same inset, so it must hold the widest any kind on the page needs.
   double inset = 0;
-  for (const auto& p : panels) inset = std::max(inset, marks_right_inset(p.kind, panels, st));
+  for (const auto& p : panels) inset = std::max(inset, marks_right_inset(p.kind, panels, axes, st));
   m.right = std::max(inset, last_x_half) + st.base * 0.2;
   return m;
 }

@@ -27,13 +27,13 @@ bool value_joins_name(const MarkContext& ctx, const Series& s) {
          spec.line_values == PanelSpec::LineValues::last;
 }
 
-NumberFormat line_value_format(const MarkContext& ctx) {
+NumberFormat line_value_format(const PanelData& p, const Axis& y) {
   // One format for the panel's labelled values, so each shows as the data
   // hold it and no two different values print alike.
   std::vector<double> labelled;
-  for (const auto& s : ctx.data.series)
-    for (std::size_t i : line_value_points(s.y, ctx.data.spec->line_values)) labelled.push_back(s.y[i]);
-  return value_format(labelled, ctx.frame.y.values);
+  for (const auto& s : p.series)
+    for (std::size_t i : line_value_points(s.y, p.spec->line_values)) labelled.push_back(s.y[i]);
+  return value_format(labelled, y.values);
 }
 
 std::vector<PointNameRequest> line_value_labels(const MarkContext& ctx, DisplayPage& page) {

@@ -22,8 +22,9 @@ std::vector<std::size_t> line_value_points(const std::vector<double>& y, PanelSp
 /// together, and no second label crowds the line's end.
 bool value_joins_name(const MarkContext& ctx, const Series& s);
 
-/// The one number format for every value the panel labels.
-NumberFormat line_value_format(const MarkContext& ctx);
+/// The one number format for every value panel `p` labels, on value axis `y`.
+NumberFormat line_value_format(const PanelData& p, const Axis& y);
+inline NumberFormat line_value_format(const MarkContext& ctx) { return line_value_format(ctx.data, ctx.frame.y); }
 
 /// Draws the dots and returns the labels to place (none for values that
 /// join their series' names).

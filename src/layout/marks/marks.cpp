@@ -4,30 +4,34 @@
 #include <cmath>
 #include <string>
 
+#include "layout/marks/line_values.h"
+#include "scale/number_format.h"
 #include "text/shaped_text.h"
 
 namespace forme {
 
-double marks_right_inset(ChartKind kind, const std::vector<PanelData>& panels, const PageStyle& style) {
+double marks_right_inset(ChartKind kind, const std::vector<PanelData>& panels, const std::vector<PanelAxes>& axes,
+                         const PageStyle& style) {
   if (kind != ChartKind::line && kind != ChartKind::stacked_bar && kind != ChartKind::stacked_area) return 0;
+  ShapeOptions figures;  // as draw_line_marks sets the value after the name
+  figures.tabular_figures = true;
   double widest = 0;
-  for (const auto& p : panels)
-    if (p.series.size() > 1 || (p.series.size() == 1 && !p.series[0].name.empty()))
-      for (const auto& s : p.series) {
-        double w = shape_text(s.name, style.fonts.regular, style.label_size()).width;
-        // A line's last value follows its name (line_values.h); the number
-        // format is not known yet, so room is kept for its digits, group
-        // marks and sign, or for three significant digits below one.
-        if (kind == ChartKind::line && p.spec && p.spec->value_labels &&
-            p.spec->line_values == PanelSpec::LineValues::last && !s.y.empty() && std::isfinite(s.y.back())) {
-          const double v = std::abs(s.y.back());
-          const int digits = v >= 1 ? static_cast<int>(std::floor(std::log10(v))) + 1 : 3;
-          const int chars = std::min(16, digits + (digits - 1) / 3 + (v < 1 ? 2 : 0) + (s.y.back() < 0 ? 1 : 0));
-          w += style.base * 0.4 + shape_text(std::string(static_cast<std::size_t>(chars), '0'), style.fonts.regular,
-                                             style.label_size()).width;
-        }
-        widest = std::max(widest, w);
-      }
+  for (std::size_t i = 0; i < panels.size(); ++i) {
+    const PanelData& p = panels[i];
+    if (p.series.size() <= 1 && (p.series.empty() || p.series[0].name.empty())) continue;
+    // A line's last value follows its name (line_values.h), in the panel's
+    // value format, so room is kept for that very text.
+    const bool values_follow = kind == ChartKind::line && p.spec && p.spec->value_labels &&
+                               p.spec->line_values == PanelSpec::LineValues::last && i < axes.size();
+    const NumberFormat format = values_follow ? line_value_format(p, axes[i].y) : NumberFormat{};
+    for (const auto& s : p.series) {
+      double w = shape_text(s.name, style.fonts.regular, style.label_size()).width;
+      if (values_follow && !s.y.empty() && std::isfinite(s.y.back()))
+        w += style.base * 0.4 +
+             shape_text(format_number(s.y.back(), format), style.fonts.regular, style.label_size(), figures).width;
+      widest = std::max(widest, w);
+    }
+  }
   // Room for a short leader, then the label.
   return widest > 0 ? widest + style.base * 1.0 : 0;
 }

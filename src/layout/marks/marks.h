@@ -34,8 +34,10 @@ struct MarkContext {
 };
 
 /// Space a chart kind needs beside the plot for its own labels (line-end
-/// labels on the right), given the page's series names.
-double marks_right_inset(ChartKind kind, const std::vector<PanelData>& panels, const PageStyle& style);
+/// labels on the right), given the page's series names and, for lines that
+/// write their last value after the name, those values as they will print.
+double marks_right_inset(ChartKind kind, const std::vector<PanelData>& panels, const std::vector<PanelAxes>& axes,
+                         const PageStyle& style);
 
 /// Records a drawn line in page.data_marks as points along it, close enough
 /// together that no label box can sit across the line between two of them.
