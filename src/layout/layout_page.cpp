@@ -84,19 +84,25 @@ std::vector<std::string> tick_texts(const Axis& a) {
 GridMeasure measure_grid(const std::vector<PanelData>& panels, const std::vector<PanelAxes>& axes,
                          const PageStyle& st, double panel_width) {
   GridMeasure m;
-  const double est_plot_width = panel_width * 0.8;
+  for (const PanelAxes& a : axes) {
+    // A column of category names takes at most 38% of its panel's width, so
+    // the bars keep the most of it (common practice); longer names wrap.
+    // Numbers are never cut, so their column is as wide as they are.
+    const double w = widest(shape_tick_labels(a.y, st));
+    m.y_label_width = std::max(m.y_label_width, a.y.kind == AxisKind::category ? std::min(w, panel_width * 0.38) : w);
+  }
+  // Every panel gets the same inset, so it must hold the widest any kind on the page needs.
+  double inset = 0;
+  for (const auto& p : panels) inset = std::max(inset, marks_right_inset(p.kind, panels, axes, st));
+  // The plot's width as the grid will give it (less the y labels and the
+  // line-end names beside it), so category names are fitted to the slots
+  // they will really have.
+  const double est_plot_width = std::max(1.0, panel_width - m.y_label_width - st.base * 0.3 - inset - st.base * 0.2);
   bool any_title = false, any_ytitle = false, any_xtitle = false;
   double last_x_half = 0;
   std::size_t title_lines = 0;
   for (std::size_t i = 0; i < panels.size(); ++i) {
     const PanelAxes& a = axes[i];
-    auto ylabels = shape_tick_labels(a.y, st);
-    // A column of category names takes at most 38% of its panel's width, so
-    // the bars keep the most of it (common practice); longer names wrap.
-    // Numbers are never cut, so their column is as wide as they are.
-    m.y_label_width = std::max(m.y_label_width, a.y.kind == AxisKind::category
-                                                    ? std::min(widest(ylabels), panel_width * 0.38)
-                                                    : widest(ylabels));
     auto xlabels = shape_tick_labels(a.x, st);
     NameFit x_names;
     if (a.x.kind == AxisKind::category) {
@@ -123,9 +129,6 @@ GridMeasure measure_grid(const std::vector<PanelData>& panels, const std::vector
   // centred on the plot's top edge.
   m.top = (any_title ? title_line * static_cast<double>(title_lines) + st.base * 0.15 : 0) + (any_ytitle ? line : 0) + line * 0.55 + st.base * 0.15;
   m.x_title = any_xtitle ? line + st.base * 0.3 : 0;
-  // Every panel gets the same inset, so it must hold the widest any kind on the page needs.
-  double inset = 0;
-  for (const auto& p : panels) inset = std::max(inset, marks_right_inset(p.kind, panels, axes, st));
   m.right = std::max(inset, last_x_half) + st.base * 0.2;
   return m;
 }

@@ -31,11 +31,11 @@ struct PageStyle {
   double standfirst_size() const { return or_else(stated.standfirst, base * steps.standfirst); }
   double panel_title_size() const { return or_else(stated.panel_title, base * steps.panel_title); }
   double label_size() const { return base; }
-  /// The smallest size labels may shrink to when they would not fit: 6 pt,
-  /// the least print carries legibly (common practice), or three quarters
-  /// of the base on jobs read from further away, so a poster's names stay
-  /// readable from where it is read.
-  double min_size() const { return std::min(base, std::max(6.0, base * 0.75)); }
+  /// The smallest size labels may shrink to when they would not fit: the
+  /// job's note size, the least it sets (so a page stays within its job's
+  /// range, and a poster's names stay readable from where it is read), and
+  /// never under 6 pt, the least print carries legibly (common practice).
+  double min_size() const { return std::min(base, std::max(6.0, note_size())); }
   double note_size() const { return or_else(stated.note, base * steps.note < 6 ? 6 : base * steps.note); }
   double line_width() const { return or_else(stated.line_width, base * 0.19); }   ///< data lines
   double rule_width() const { return or_else(stated.rule_width, base * 0.07); }   ///< gridlines and ticks

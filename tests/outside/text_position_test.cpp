@@ -54,6 +54,9 @@ TEST_CASE("pdftotext finds title, axis titles and tick labels where layout place
     if (w == t->text.utf8) CHECK(best->x_max == Approx(box.right()).margin(0.5));
     ++checked;
   }
-  // Title, y axis title(s) and every tick label of the demo page.
-  CHECK(checked > 40);
+  // Title, the two y axis titles, and every tick label of the demo page: six
+  // values on each labelled axis, and every second month under each bottom
+  // panel, since twelve do not fit at the job's sizes (33 when this was
+  // written; a regression floor, not a standard).
+  CHECK(checked >= 30);
 }
