@@ -241,6 +241,10 @@ NumberFormat value_format(const std::vector<double>& values, const NumberFormat&
     const int held = static_cast<int>(shortest_decimal(std::abs(v)).digits.size());
     digits = std::max(digits, held <= kMostTyped ? held : kComputed);
   }
+  // An SI prefix is the author asking for a compact number: "46.4k", not the
+  // CSV's "46.449k" (three significant digits, common practice). Values
+  // that would then print alike still get the digits that tell them apart.
+  if (f.style == NumberFormat::Style::si) digits = std::min(digits, kComputed);
   std::vector<double> distinct;
   for (double v : values)
     if (std::isfinite(v)) distinct.push_back(v);

@@ -56,7 +56,8 @@ std::string format_number(double v, const NumberFormat& f);
 /// as the data hold it: with the significant digits of its shortest exact
 /// decimal when that has at most six (a typed value: 1.48, 61.66, 3.4×10⁹),
 /// else three (a computed one: 103.448275… → 103; common practice for
-/// labels read at a glance); all share the largest such count, and more are
+/// labels read at a glance; SI values always take three: 46.4k); all share
+/// the largest such count, and more are
 /// added until distinct values print distinctly. A value printed shorter
 /// than the count keeps its own digits (61 stays "61" beside "61.66"). A
 /// format whose `significant` is already set comes back as it is.

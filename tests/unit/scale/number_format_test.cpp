@@ -209,9 +209,12 @@ TEST_CASE("format_value writes a label's value as the data hold it", "[scale][fo
   CHECK(format_value(1234567.891, plain) == "1,234,568");  // ten digits: computed-looking, whole digits kept
   NumberFormat si;
   si.style = Style::si;
-  CHECK(format_value(46449, si) == "46.449k");
-  CHECK(format_value(999'960, si) == "999.96k");
-  CHECK(format_value(0.04567, si) == "45.67m");
+  // SI is asked-for compactness: three significant digits (common practice),
+  // the prefix chosen after rounding (999,960 → 1.00M → "1M").
+  CHECK(format_value(46449, si) == "46.4k");
+  CHECK(format_value(999'960, si) == "1M");
+  CHECK(format_value(0.04567, si) == "45.7m");
+  CHECK(format_value(2'500, si) == "2.5k");  // fewer digits than three stay as held
   NumberFormat share;
   share.style = Style::fraction_percent;
   CHECK(format_value(0.125, share) == "12.5%");
