@@ -39,6 +39,13 @@ std::vector<double> percent_change(const std::vector<double>& values, std::size_
   return out;
 }
 
+std::vector<double> percent_change_from(const std::vector<double>& values, const std::vector<std::size_t>& earlier) {
+  std::vector<double> out(values.size(), kNaN);
+  for (std::size_t i = 0; i < values.size() && i < earlier.size(); ++i)
+    if (earlier[i] < values.size()) out[i] = ratio_percent(values[i] - values[earlier[i]], values[earlier[i]]);
+  return out;
+}
+
 std::vector<double> difference(const std::vector<double>& a, const std::vector<double>& b) {
   std::vector<double> out(std::max(a.size(), b.size()), kNaN);
   const std::size_t both = std::min(a.size(), b.size());

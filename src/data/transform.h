@@ -23,6 +23,15 @@ std::vector<double> index_to_base(const std::vector<double>& values, std::size_t
 /// sign follows the ratio, not the direction of the change.
 std::vector<double> percent_change(const std::vector<double>& values, std::size_t lag = 1);
 
+/// No earlier value to compare with (see `percent_change_from`).
+inline constexpr std::size_t kNoEarlier = static_cast<std::size_t>(-1);
+
+/// Percent change of each value from the one at `earlier[i]` (kNoEarlier:
+/// NaN), for series whose comparison is not a fixed count of positions back:
+/// a yearly series missing a year compares 2018 with 2017, which it lacks,
+/// not with 2016.
+std::vector<double> percent_change_from(const std::vector<double>& values, const std::vector<std::size_t>& earlier);
+
 /// a[i] - b[i]. The result is as long as the longer input; positions that
 /// only one input has are NaN.
 std::vector<double> difference(const std::vector<double>& a, const std::vector<double>& b);

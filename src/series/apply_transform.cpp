@@ -4,9 +4,12 @@
 #include <charconv>
 #include <cmath>
 #include <map>
+#include <optional>
+#include <unordered_map>
 
 #include "data/dates.h"
 #include "data/transform.h"
+#include "series/periods.h"
 
 namespace forme {
 
@@ -63,6 +66,51 @@ Aligned align(const std::vector<Series>& series) {
   return a;
 }
 
+// A percent change on a regular date series compares each value with the
+// one `lag` periods earlier, found by date: where that period has no value
+// (a missed year), the change has none either, instead of silently spanning
+// two years.
+struct PeriodLag {
+  std::vector<std::size_t> earlier;
+  std::string words;  // "the previous year", "4 quarters earlier"
+};
+
+std::optional<PeriodLag> period_lag(const Series& s, DatePrecision prec, std::size_t lag) {
+  std::vector<long> idx;
+  idx.reserve(s.x.size());
+  for (double x : s.x) idx.push_back(period_index(x, prec));
+  std::vector<long> sorted = idx;
+  std::sort(sorted.begin(), sorted.end());
+  if (std::adjacent_find(sorted.begin(), sorted.end()) != sorted.end()) return std::nullopt;  // two values in one period
+  const std::optional<long> step = usual_step(sorted);
+  if (!step) return std::nullopt;
+  // Working days only (no Saturday or Sunday value): Monday compares with
+  // Friday, the previous value, as a reader of such a series expects.
+  if (prec == DatePrecision::day && *step == 1 &&
+      std::none_of(sorted.begin(), sorted.end(), [](long d) { return ((d % 7) + 7 + 4) % 7 == 0 || ((d % 7) + 7 + 4) % 7 == 6; }))
+    return std::nullopt;
+  std::unordered_map<long, std::size_t> at;
+  for (std::size_t i = 0; i < idx.size(); ++i) at.emplace(idx[i], i);
+  PeriodLag out;
+  out.earlier.assign(idx.size(), kNoEarlier);
+  const long back = *step * static_cast<long>(lag);
+  for (std::size_t i = 0; i < idx.size(); ++i)
+    if (auto it = at.find(idx[i] - back); it != at.end()) out.earlier[i] = it->second;
+  const char* unit = prec == DatePrecision::year                      ? "year"
+                     : prec == DatePrecision::month && *step == 3     ? "quarter"
+                     : prec == DatePrecision::month && *step == 12    ? "year"
+                     : prec == DatePrecision::month && *step == 1     ? "month"
+                     : prec == DatePrecision::day && *step == 7       ? "week"
+                     : prec == DatePrecision::day && *step == 1       ? "day"
+                                                                      : nullptr;
+  const long count = prec == DatePrecision::year ? back : static_cast<long>(lag);
+  if (unit)
+    out.words = count == 1 ? std::string("the previous ") + unit : std::to_string(count) + " " + unit + "s earlier";
+  else
+    out.words = lag == 1 ? "the previous value" : std::to_string(lag) + " values earlier";
+  return out;
+}
+
 }  // namespace
 
 TransformStatement apply_transform(const TransformSpec& t, PanelData& p) {
@@ -89,11 +137,23 @@ TransformStatement apply_transform(const TransformSpec& t, PanelData& p) {
       break;
     }
     case Kind::percent_change: {
+      const std::size_t lag = static_cast<std::size_t>(t.lag);
+      std::string back = lag == 1 ? "the previous value" : std::to_string(lag) + " values earlier";
+      std::optional<std::string> same_back;  // the words, when every series counts in one period
+      bool periods_for_all = true;
       for (auto& s : p.series) {
-        s.y = percent_change(s.y, static_cast<std::size_t>(t.lag));
+        const std::optional<PeriodLag> by_period = p.x_kind == AxisKind::date ? period_lag(s, p.x_dates, lag) : std::nullopt;
+        if (by_period) {
+          s.y = percent_change_from(s.y, by_period->earlier);
+          if (!same_back) same_back = by_period->words;
+          periods_for_all = periods_for_all && *same_back == by_period->words;
+        } else {
+          s.y = percent_change(s.y, lag);
+          periods_for_all = false;
+        }
         drop_missing(s);
       }
-      const std::string back = t.lag == 1 ? "the previous value" : std::to_string(t.lag) + " values earlier";
+      if (periods_for_all && same_back) back = *same_back;
       said.axis_title = "% change from " + back;
       said.sentence = "Values are the percentage change from " + back + ".";
       break;

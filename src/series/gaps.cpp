@@ -3,10 +3,10 @@
 #include <algorithm>
 #include <cmath>
 #include <map>
-#include <numeric>
 #include <optional>
 
 #include "data/dates.h"
+#include "series/periods.h"
 
 namespace forme {
 
@@ -15,47 +15,10 @@ namespace {
 const char* const kMonthNames[] = {"January", "February", "March",     "April",   "May",      "June",
                                    "July",    "August",   "September", "October", "November", "December"};
 
-// A date as a count of whole periods (years, months or days), so that
-// consecutive periods differ by one.
-long period_index(double day, DatePrecision p) {
-  const CivilDate c = civil_from_days(static_cast<long>(day));
-  switch (p) {
-    case DatePrecision::year: return c.year;
-    case DatePrecision::month: return static_cast<long>(c.year) * 12 + (c.month - 1);
-    case DatePrecision::day: return static_cast<long>(day);
-  }
-  return static_cast<long>(day);
-}
-
-double period_day(long index, DatePrecision p) {
-  switch (p) {
-    case DatePrecision::year: return static_cast<double>(days_from_civil(static_cast<int>(index), 1, 1));
-    case DatePrecision::month:
-      return static_cast<double>(days_from_civil(static_cast<int>(index / 12), static_cast<int>(index % 12) + 1, 1));
-    case DatePrecision::day: return static_cast<double>(index);
-  }
-  return static_cast<double>(index);
-}
-
 // 1970-01-01 was a Thursday: day 0 is weekday 4 when Sunday is 0.
 bool is_weekend(long day) {
   const long w = ((day % 7) + 7 + 4) % 7;
   return w == 0 || w == 6;
-}
-
-// The series' step in whole periods: the greatest common divisor of its
-// steps (1 for a yearly series with a year missing, 3 for quarters), when
-// the series is regular: three points or more, covering at least half the
-// periods between its first and last.
-std::optional<long> usual_step(const std::vector<long>& idx) {
-  if (idx.size() < 3) return std::nullopt;
-  long step = 0;
-  for (std::size_t i = 1; i < idx.size(); ++i)
-    if (idx[i] > idx[i - 1]) step = std::gcd(step, idx[i] - idx[i - 1]);
-  if (step == 0) return std::nullopt;
-  const long periods = (idx.back() - idx.front()) / step + 1;
-  if (static_cast<long>(idx.size()) * 2 < periods) return std::nullopt;
-  return step;
 }
 
 struct Gap {

@@ -4,6 +4,7 @@
 
 #include <cmath>
 
+#include "data/dates.h"
 #include "series/apply_transform.h"
 
 using namespace forme;
@@ -92,4 +93,35 @@ TEST_CASE("share of total: each x sums to 100", "[series][transform]") {
   CHECK(p.series[0].y[0] == Approx(25));
   CHECK(p.series[1].y[0] == Approx(75));
   CHECK(p.series[0].y[1] + p.series[1].y[1] == Approx(100));
+}
+
+TEST_CASE("percent change on a date axis compares with the period before, not the value before", "[series][transform]") {
+  // Yearly 2014..2019 with 2017 missing: 100, 110, 121, -, 150, 165.
+  // 2015: (110-100)/100 = +10 %; 2016: (121-110)/110 = +10 %;
+  // 2018 has no 2017 to compare with, so it has no change (not +24 % over two years);
+  // 2019: (165-150)/150 = +10 %.
+  auto day = [](int y) { return static_cast<double>(days_from_civil(y, 1, 1)); };
+  PanelData p = panel_with({{"North", {day(2014), day(2015), day(2016), day(2018), day(2019)}, {100, 110, 121, 150, 165}}});
+  p.x_kind = AxisKind::date;
+  p.x_dates = DatePrecision::year;
+  TransformStatement said = apply_transform(spec(TransformSpec::Kind::percent_change), p);
+  REQUIRE(p.series[0].x == std::vector<double>{day(2015), day(2016), day(2019)});
+  CHECK(p.series[0].y[0] == Approx(10));
+  CHECK(p.series[0].y[1] == Approx(10));
+  CHECK(p.series[0].y[2] == Approx(10));
+  CHECK(said.axis_title == "% change from the previous year");
+
+  // Quarters (months 1, 4, 7, 10), four quarters back: 2021-Q1 vs 2020-Q1 = (120-100)/100 = +20 %.
+  auto month = [](int y, int m) { return static_cast<double>(days_from_civil(y, m, 1)); };
+  PanelData q = panel_with({{"South",
+                             {month(2020, 1), month(2020, 4), month(2020, 7), month(2020, 10), month(2021, 1)},
+                             {100, 90, 95, 105, 120}}});
+  q.x_kind = AxisKind::date;
+  q.x_dates = DatePrecision::month;
+  TransformSpec t = spec(TransformSpec::Kind::percent_change);
+  t.lag = 4;
+  said = apply_transform(t, q);
+  REQUIRE(q.series[0].x == std::vector<double>{month(2021, 1)});
+  CHECK(q.series[0].y[0] == Approx(20));
+  CHECK(said.axis_title == "% change from 4 quarters earlier");
 }
