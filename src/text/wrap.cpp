@@ -1,17 +1,10 @@
 #include "text/wrap.h"
 
-#include <linebreak.h>
-
-#include <mutex>
+#include "text/line_breaks.h"
 
 namespace forme {
 
 namespace {
-
-void init_unibreak_once() {
-  static std::once_flag once;
-  std::call_once(once, [] { init_linebreak(); });
-}
 
 std::string trim_trailing_space(std::string s) {
   while (!s.empty() && (s.back() == ' ' || s.back() == '\n' || s.back() == '\r' || s.back() == '\t')) s.pop_back();
@@ -22,18 +15,15 @@ std::string trim_trailing_space(std::string s) {
 
 std::vector<ShapedText> wrap_text(const std::string& utf8, const FontRef& font, double size, double width,
                                   const ShapeOptions& options) {
-  init_unibreak_once();
-  std::vector<char> brks(utf8.size());
-  if (!utf8.empty())
-    set_linebreaks_utf8(reinterpret_cast<const utf8_t*>(utf8.data()), utf8.size(), "en", brks.data());
+  const std::vector<LineBreak> brks = line_breaks(utf8);
 
   // Candidate break positions: byte offsets just after a break opportunity.
   std::vector<ShapedText> lines;
   std::size_t line_start = 0, last_fit = 0;
   for (std::size_t i = 0; i < utf8.size(); ++i) {
-    const char b = brks[i];
+    const LineBreak b = brks[i];
     const bool end = i + 1 == utf8.size();
-    if (b != LINEBREAK_MUSTBREAK && b != LINEBREAK_ALLOWBREAK && !end) continue;
+    if (b != LineBreak::must && b != LineBreak::allow && !end) continue;
     const std::size_t cut = i + 1;
     std::string candidate = trim_trailing_space(utf8.substr(line_start, cut - line_start));
     const bool fits = shape_text(candidate, font, size, options).width <= width;
@@ -44,7 +34,7 @@ std::vector<ShapedText> wrap_text(const std::string& utf8, const FontRef& font, 
       candidate = trim_trailing_space(utf8.substr(line_start, cut - line_start));
     }
     last_fit = cut;
-    if (b == LINEBREAK_MUSTBREAK && !end) {
+    if (b == LineBreak::must && !end) {
       lines.push_back(shape_text(candidate, font, size, options));
       line_start = last_fit = cut;
     }
@@ -60,13 +50,11 @@ namespace {
 
 // Byte offsets just after each break opportunity (and the end of the text).
 std::vector<std::size_t> break_ends(const std::string& utf8) {
-  init_unibreak_once();
   std::vector<std::size_t> ends;
   if (utf8.empty()) return ends;
-  std::vector<char> brks(utf8.size());
-  set_linebreaks_utf8(reinterpret_cast<const utf8_t*>(utf8.data()), utf8.size(), "en", brks.data());
+  const std::vector<LineBreak> brks = line_breaks(utf8);
   for (std::size_t i = 0; i < utf8.size(); ++i)
-    if (brks[i] == LINEBREAK_MUSTBREAK || brks[i] == LINEBREAK_ALLOWBREAK || i + 1 == utf8.size())
+    if (brks[i] == LineBreak::must || brks[i] == LineBreak::allow || i + 1 == utf8.size())
       ends.push_back(i + 1);
   if (ends.back() != utf8.size()) ends.push_back(utf8.size());
   return ends;

@@ -1,6 +1,6 @@
 #pragma once
 /// Breaks a paragraph into lines that fit a width. Break opportunities come
-/// from the Unicode line breaking algorithm (UAX #14, via libunibreak);
+/// from the Unicode line breaking algorithm (UAX #14, `line_breaks`);
 /// lines are filled greedily, each measured with shaped advances.
 #include <string>
 #include <vector>
