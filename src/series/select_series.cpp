@@ -167,8 +167,19 @@ PanelData build_panel(const PanelSpec& p, const Table& t, const std::vector<std:
   const std::string* last_name = nullptr;
   std::size_t last_series = 0;
   d.rows.reserve(rows.size());
+  // A blank name cannot be placed on an axis or beside a line: drawing it
+  // as an unnamed bar or series would hide the damage.
+  auto refuse_blank = [&](std::size_t r, const Column& c, const char* what) {
+    throw InputError(SourceLoc{t.path, r < t.row_lines.size() ? t.row_lines[r] : 0, 1},
+                     "this row has no name in column '" + c.name + "', which names the " + what,
+                     "fill the cell in, or leave the row out with 'where'");
+  };
+  auto blank = [](const std::string& s) { return s.find_first_not_of(" \t") == std::string::npos; };
   for (std::size_t r : rows) {
     const std::string& sname = sc ? sc->text[r] : no_name;
+    if (sc && blank(sname)) refuse_blank(r, *sc, "series");
+    if (xcat && blank(xc.text[r])) refuse_blank(r, xc, "categories");
+    if (ycat && blank(yc.text[r])) refuse_blank(r, yc, "categories");
     if (!last_name || *last_name != sname) {
       auto it = series_index.find(sname);
       if (it == series_index.end()) {
